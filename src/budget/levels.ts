@@ -1,0 +1,40 @@
+import { InputError } from '../errors';
+import type { ConfidenceLevel, QuantityName } from '../inputs/budget-input';
+import type { BudgetSeries, VarianceQuantity } from './budget-series';
+import { confidenceFactor1D } from './confidence';
+
+/** The levels a requirement may use. */
+export const LEVELS: readonly ConfidenceLevel[] = ['1sigma', '2sigma', '95%', '50%'];
+
+/** The quantities a requirement may constrain. */
+export const QUANTITY_NAMES: readonly QuantityName[] = ['heading', 'speed', 'north', 'east', 'along-track', 'cross-track', 'horizontal'];
+
+/** Dimension of a quantity's limit. */
+export function limitDimension(q: QuantityName): 'angle' | 'speed' | 'length' {
+  return q === 'heading' ? 'angle' : q === 'speed' ? 'speed' : 'length';
+}
+
+/**
+ * The series a requirement compares with its limit, in SI: a 1-D quantity's
+ * sigma times the level's factor; for 'horizontal', DRMS (1σ), 2DRMS (2σ),
+ * the exact R95 (95 %) or CEP (50 %) (ENGINE.md §8).
+ * @throws InputError when the suite does not produce the quantity.
+ */
+export function levelSeries(series: BudgetSeries, quantity: QuantityName, level: ConfidenceLevel, path: string): Float64Array {
+  if (quantity === 'horizontal') {
+    if (level === '95%') return series.r95M;
+    if (level === '50%') return series.cepM;
+    const drms = requireVariance(series, 'drms', path);
+    const f = level === '2sigma' ? 2 : 1;
+    return drms.map((v) => f * Math.sqrt(Math.max(0, v)));
+  }
+  const variance = requireVariance(series, quantity, path);
+  const f = confidenceFactor1D(level);
+  return variance.map((v) => f * Math.sqrt(Math.max(0, v)));
+}
+
+function requireVariance(series: BudgetSeries, q: VarianceQuantity, path: string): Float64Array {
+  const s = series.quantities[q];
+  if (!s) throw new InputError(path, `the suite has no speed input, so it reports no ${q}; add a wheel-speed sensor or constrain heading`);
+  return s.total;
+}

@@ -1,0 +1,123 @@
+import { InputError } from '../errors';
+import { quantityToSI, requireArray, requireId, requireOneOf } from '../inputs/checks';
+import type { ConfidenceLevel, QuantityName, RequirementInput } from '../inputs/budget-input';
+import type { MeasurementStream } from '../covariance/error-model';
+import { TIME_SLACK_S } from '../mission/nominal-trajectory';
+import { fromSI } from '../units';
+import type { BudgetSeries } from './budget-series';
+import { LEVELS, levelSeries, limitDimension, QUANTITY_NAMES } from './levels';
+
+/** A requirement in SI, validated. */
+export interface ResolvedRequirement {
+  id: string;
+  quantity: QuantityName;
+  level: ConfidenceLevel;
+  limitSI: number;
+  /** The limit as written, for margins in the limit's unit. */
+  limit: { value: number; unit: string };
+  windowStartS: number;
+  windowEndS: number;
+  path: string;
+}
+
+/** How long a requirement holds after an aiding sensor's outage begins. */
+export interface OutageHold {
+  sensorId: string;
+  outageId: string;
+  startS: number;
+  endS: number;
+  /** Seconds from the outage's start until the requirement first breaks; null when it holds throughout. */
+  timeToExceedS: number | null;
+}
+
+/** A requirement's verdict over its window. */
+export interface RequirementResult {
+  id: string;
+  quantity: QuantityName;
+  level: ConfidenceLevel;
+  limit: { value: number; unit: string };
+  verdict: 'pass' | 'fail';
+  /** Limit minus the worst value, in the limit's unit (positive holds). */
+  margin: number;
+  worstValue: number;
+  worstTimeS: number;
+  windowStartS: number;
+  windowEndS: number;
+  outages: OutageHold[];
+}
+
+/**
+ * Validates requirements against the mission.
+ * @throws InputError naming the requirement's field.
+ */
+export function resolveRequirements(list: RequirementInput[] | undefined, durationS: number): ResolvedRequirement[] {
+  const ids = new Set<string>();
+  return requireArray(list ?? [], 'requirements', true).map((r, i) => {
+    const p = `requirements[${i}]`;
+    if (!r || typeof r !== 'object') throw new InputError(p, 'must be a requirement object');
+    const id = requireId(r.id, `${p}.id`);
+    if (ids.has(id)) throw new InputError(`${p}.id`, `"${id}" is used by another requirement`);
+    ids.add(id);
+    const quantity = requireOneOf(r.quantity, QUANTITY_NAMES, `${p}.quantity`);
+    const level = requireOneOf(r.level, LEVELS, `${p}.level`);
+    const limitSI = quantityToSI(r.limit, limitDimension(quantity), `${p}.limit`);
+    if (!(limitSI > 0)) throw new InputError(`${p}.limit.value`, `must be greater than zero, got ${r.limit.value}`);
+    let windowStartS = 0, windowEndS = durationS;
+    if (r.window !== undefined) {
+      windowStartS = quantityToSI(r.window.start, 'time', `${p}.window.start`);
+      windowEndS = quantityToSI(r.window.end, 'time', `${p}.window.end`);
+      if (windowStartS < -TIME_SLACK_S || windowEndS > durationS + TIME_SLACK_S || !(windowEndS > windowStartS)) {
+        throw new InputError(`${p}.window`, `must satisfy 0 <= start < end <= ${durationS} s; got ${windowStartS} to ${windowEndS} s`);
+      }
+    }
+    return { id, quantity, level, limitSI, limit: { value: r.limit.value, unit: r.limit.unit }, windowStartS, windowEndS, path: p };
+  });
+}
+
+/**
+ * Verdict, margin and time-to-exceed for each outage of each aiding sensor
+ * (ENGINE.md §8): pass when the value stays <= limit at every step in the
+ * window; the break time is interpolated linearly between steps.
+ */
+export function evaluateRequirement(req: ResolvedRequirement, series: BudgetSeries, streams: MeasurementStream[]): RequirementResult {
+  const values = levelSeries(series, req.quantity, req.level, req.path);
+  const t = series.tS;
+  let worst = -Infinity, worstK = 0;
+  for (let k = 0; k < t.length; k++) {
+    if (t[k] < req.windowStartS - TIME_SLACK_S || t[k] > req.windowEndS + TIME_SLACK_S) continue;
+    if (values[k] > worst) { worst = values[k]; worstK = k; }
+  }
+  const dim = limitDimension(req.quantity);
+  const worstValue = fromSI(worst, req.limit.unit, dim, `${req.path}.limit`);
+  const outages: OutageHold[] = [];
+  for (const stream of streams) {
+    for (const o of stream.outages) {
+      const a = Math.max(o.startS, req.windowStartS), b = Math.min(o.endS, req.windowEndS);
+      if (b - a <= TIME_SLACK_S) continue;
+      outages.push({ sensorId: stream.sensorId, outageId: o.id, startS: o.startS, endS: o.endS, timeToExceedS: timeToExceed(t, values, req.limitSI, a, b, o.startS) });
+    }
+  }
+  return {
+    id: req.id, quantity: req.quantity, level: req.level, limit: req.limit,
+    verdict: worst <= req.limitSI ? 'pass' : 'fail',
+    margin: req.limit.value - worstValue,
+    worstValue, worstTimeS: t[worstK],
+    windowStartS: req.windowStartS, windowEndS: req.windowEndS, outages,
+  };
+}
+
+/** First time in [fromS, toS) at which values exceed the limit, minus originS; null when never. */
+export function timeToExceed(t: Float64Array, values: Float64Array, limit: number, fromS: number, toS: number, originS: number): number | null {
+  let prev = -1;
+  for (let k = 0; k < t.length; k++) {
+    if (t[k] < fromS - TIME_SLACK_S) { prev = k; continue; }
+    if (t[k] >= toS - TIME_SLACK_S) break;
+    if (values[k] > limit) {
+      if (prev < 0 || values[prev] > limit) return Math.max(0, t[k] - originS);
+      const frac = (limit - values[prev]) / (values[k] - values[prev]);
+      return Math.max(0, t[prev] + frac * (t[k] - t[prev]) - originS);
+    }
+    prev = k;
+  }
+  return null;
+}

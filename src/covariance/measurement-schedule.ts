@@ -1,0 +1,82 @@
+import type { ErrorModel } from './error-model';
+import { TIME_SLACK_S, type NominalTrajectory } from '../mission/nominal-trajectory';
+
+/** One scalar measurement to process at a step boundary, with h in the model's states. */
+export interface ScheduledMeasurement {
+  key: string;
+  sensorId: string;
+  /** Measurement time, s (it is processed at the boundary at or after it). */
+  tS: number;
+  hIdx: Int32Array;
+  hVal: Float64Array;
+  /** R owned by each source: (source index, variance) pairs. */
+  rSources: Int32Array;
+  rVariances: Float64Array;
+  rTotal: number;
+}
+
+/** Whether a measurement at tS falls in a half-open outage [start, end) (ENGINE.md §5, 1e-9 s slack). */
+export function inOutage(outages: { startS: number; endS: number }[], tS: number): boolean {
+  return outages.some((o) => tS >= o.startS - TIME_SLACK_S && tS < o.endS - TIME_SLACK_S);
+}
+
+/**
+ * Every scalar measurement of the mission, grouped by the step boundary it is
+ * processed at: a sensor at rate f measures at t = j/f and is processed at
+ * the first boundary at or after t, in sensor order (ENGINE.md §5).
+ * Built before propagation so that geometry errors (a landmark on the path)
+ * are reported as input errors, not from inside the loop.
+ */
+export function scheduleMeasurements(model: ErrorModel, traj: NominalTrajectory): ScheduledMeasurement[][] {
+  const last = traj.tS.length - 1;
+  const endS = traj.tS[last];
+  const byBoundary: ScheduledMeasurement[][] = Array.from({ length: last + 1 }, () => []);
+  const rByKey = noiseByKey(model);
+  const n = model.states.length;
+  const { along, cross } = model.core;
+  for (const stream of model.streams) {
+    for (let j = 0; ; j++) {
+      const tS = j / stream.rateHz;
+      if (tS > endS + TIME_SLACK_S) break;
+      if (inOutage(stream.outages, tS)) continue;
+      const k = Math.min(last, Math.max(0, Math.ceil(tS / traj.stepS - 1e-9)));
+      const psi = traj.headingRad[k];
+      const c = Math.cos(psi), s = Math.sin(psi);
+      const rows = stream.rowsAt({ northM: traj.northM[k], eastM: traj.eastM[k], headingRad: psi });
+      for (const row of rows) {
+        const h = new Float64Array(n);
+        // dN = c pA - s pC, dE = s pA + c pC (path frame to north/east).
+        h[along] += row.hNorth * c + row.hEast * s;
+        h[cross] += -row.hNorth * s + row.hEast * c;
+        for (const [idx, coeff] of row.hStates) h[idx] += coeff;
+        const r = rByKey.get(row.noiseKey) ?? { sources: [], variances: [] };
+        const hIdx: number[] = [];
+        for (let i = 0; i < n; i++) if (h[i] !== 0) hIdx.push(i);
+        byBoundary[k].push({
+          key: row.key,
+          sensorId: stream.sensorId,
+          tS,
+          hIdx: Int32Array.from(hIdx),
+          hVal: Float64Array.from(hIdx.map((i) => h[i])),
+          rSources: Int32Array.from(r.sources),
+          rVariances: Float64Array.from(r.variances),
+          rTotal: r.variances.reduce((a, b) => a + b, 0),
+        });
+      }
+    }
+  }
+  return byBoundary;
+}
+
+function noiseByKey(model: ErrorModel): Map<string, { sources: number[]; variances: number[] }> {
+  const map = new Map<string, { sources: number[]; variances: number[] }>();
+  model.sources.forEach((src, s) => {
+    for (const piece of src.measurementNoise) {
+      const entry = map.get(piece.measurement) ?? { sources: [], variances: [] };
+      entry.sources.push(s);
+      entry.variances.push(piece.varianceSI);
+      map.set(piece.measurement, entry);
+    }
+  });
+  return map;
+}
