@@ -86,3 +86,36 @@ export function josephUpdateInPlace(
     }
   }
 }
+
+/**
+ * ψ <- Φ ψ for `count` state vectors stored back to back. A source that owns
+ * only initial variance (a random constant, the initial pose) has a rank-one
+ * P_s = ψ ψᵀ for each of its P0 entries, which stays rank one through
+ * propagation and fixed-gain updates: carrying ψ costs n operations instead
+ * of n², and keeps P_s exactly positive semi-definite.
+ * @param scratch length-n workspace.
+ */
+export function propagateVectors(v: Float64Array, count: number, phi: SparseRows, scratch: Float64Array): void {
+  const n = phi.n;
+  const { rowStart, col, val } = phi;
+  for (let c = 0; c < count; c++) {
+    const off = c * n;
+    for (let i = 0; i < n; i++) {
+      let sum = 0;
+      for (let p = rowStart[i]; p < rowStart[i + 1]; p++) sum += val[p] * v[off + col[p]];
+      scratch[i] = sum;
+    }
+    for (let i = 0; i < n; i++) v[off + i] = scratch[i];
+  }
+}
+
+/** ψ <- (I − K hᵀ) ψ for `count` vectors: the fixed-gain update of a rank-one P_s with no R of its own. */
+export function updateVectors(v: Float64Array, count: number, n: number, hIdx: Int32Array, hVal: Float64Array, gain: Float64Array): void {
+  for (let c = 0; c < count; c++) {
+    const off = c * n;
+    let hv = 0;
+    for (let p = 0; p < hIdx.length; p++) hv += hVal[p] * v[off + hIdx[p]];
+    if (hv === 0) continue;
+    for (let i = 0; i < n; i++) v[off + i] -= gain[i] * hv;
+  }
+}

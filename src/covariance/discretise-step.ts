@@ -1,5 +1,6 @@
 import type { ErrorModel } from './error-model';
 import { reachability, toSparseRows, type SparseRows } from './sparse-rows';
+import { propagationKernel, type PropagationKernel } from './compiled-propagation';
 import { expm } from './matrix-exponential';
 import { discretiseVanLoan } from './van-loan';
 
@@ -12,6 +13,8 @@ export interface SparseEntries {
 /** Φ and every source's Q_d over one piece of a step. */
 export interface StepDiscretisation {
   phi: SparseRows;
+  /** Φ Φᵀ-propagation specialised to Φ's pattern. */
+  propagate: PropagationKernel;
   /** Q_d of each source (index = source index), sparse. */
   qdBySource: SparseEntries[];
   /** Q_d of the whole model, dense row-major. */
@@ -52,7 +55,8 @@ export function discretiseStep(model: ErrorModel, speedMps: number, turnRateRadp
     for (let e = 0; e < n * n; e++) qdTotal[e] += qd[e];
     return sparseEntries(qd);
   });
-  return { phi: toSparseRows(phiDense, n, reach), qdBySource, qdTotal };
+  const phi = toSparseRows(phiDense, n, reach);
+  return { phi, propagate: propagationKernel(phi), qdBySource, qdTotal };
 }
 
 function sparseEntries(dense: Float64Array): SparseEntries {

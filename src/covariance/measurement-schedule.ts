@@ -49,34 +49,40 @@ export function scheduleMeasurements(model: ErrorModel, traj: NominalTrajectory)
         h[along] += row.hNorth * c + row.hEast * s;
         h[cross] += -row.hNorth * s + row.hEast * c;
         for (const [idx, coeff] of row.hStates) h[idx] += coeff;
-        const r = rByKey.get(row.noiseKey) ?? { sources: [], variances: [] };
-        const hIdx: number[] = [];
-        for (let i = 0; i < n; i++) if (h[i] !== 0) hIdx.push(i);
-        byBoundary[k].push({
-          key: row.key,
-          sensorId: stream.sensorId,
-          tS,
-          hIdx: Int32Array.from(hIdx),
-          hVal: Float64Array.from(hIdx.map((i) => h[i])),
-          rSources: Int32Array.from(r.sources),
-          rVariances: Float64Array.from(r.variances),
-          rTotal: r.variances.reduce((a, b) => a + b, 0),
-        });
+        const r = rByKey.get(row.noiseKey) ?? NO_NOISE;
+        let count = 0;
+        for (let i = 0; i < n; i++) if (h[i] !== 0) count++;
+        const hIdx = new Int32Array(count), hVal = new Float64Array(count);
+        for (let i = 0, c = 0; i < n; i++) if (h[i] !== 0) { hIdx[c] = i; hVal[c++] = h[i]; }
+        byBoundary[k].push({ key: row.key, sensorId: stream.sensorId, tS, hIdx, hVal, ...r });
       }
     }
   }
   return byBoundary;
 }
 
-function noiseByKey(model: ErrorModel): Map<string, { sources: number[]; variances: number[] }> {
-  const map = new Map<string, { sources: number[]; variances: number[] }>();
+/** R of one measurement key: its owners and their variances (shared by every event of that key). */
+type NoiseOwners = Pick<ScheduledMeasurement, 'rSources' | 'rVariances' | 'rTotal'>;
+
+const NO_NOISE: NoiseOwners = { rSources: new Int32Array(0), rVariances: new Float64Array(0), rTotal: 0 };
+
+function noiseByKey(model: ErrorModel): Map<string, NoiseOwners> {
+  const lists = new Map<string, { sources: number[]; variances: number[] }>();
   model.sources.forEach((src, s) => {
     for (const piece of src.measurementNoise) {
-      const entry = map.get(piece.measurement) ?? { sources: [], variances: [] };
+      const entry = lists.get(piece.measurement) ?? { sources: [], variances: [] };
       entry.sources.push(s);
       entry.variances.push(piece.varianceSI);
-      map.set(piece.measurement, entry);
+      lists.set(piece.measurement, entry);
     }
   });
+  const map = new Map<string, NoiseOwners>();
+  for (const [key, { sources, variances }] of lists) {
+    map.set(key, {
+      rSources: Int32Array.from(sources),
+      rVariances: Float64Array.from(variances),
+      rTotal: variances.reduce((a, b) => a + b, 0),
+    });
+  }
   return map;
 }

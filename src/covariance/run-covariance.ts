@@ -1,10 +1,13 @@
 import type { ErrorModel } from './error-model';
 import type { NominalTrajectory } from '../mission/nominal-trajectory';
-import { addDense, addSparse, josephUpdateInPlace, multiplySparseVector, propagateInPlace } from './covariance-kernels';
+import {
+  addDense, addSparse, josephUpdateInPlace, multiplySparseVector, propagateVectors, updateVectors,
+} from './covariance-kernels';
 import { checkCovariance, type CovarianceIssue } from './covariance-health';
-import { discretiseStep, type StepDiscretisation } from './discretise-step';
+import type { StepDiscretisation } from './discretise-step';
+import { DiscretisationCache } from './discretisation-cache';
 import { scheduleMeasurements, type ScheduledMeasurement } from './measurement-schedule';
-import { stepPieces } from './step-pieces';
+import { initialiseStorage, planSourceStorage, sourceEntry, sourceMatrix, type SourceStorage } from './source-storage';
 
 /**
  * The entries of P the outputs need, per step, for the total (row 0) and
@@ -22,6 +25,7 @@ export interface RecordedEntries {
 /** What the covariance run produces. */
 export interface CovarianceHistory {
   steps: number;
+  /** Sources with recorded contributions (0 when run without them). */
   sourceCount: number;
   entries: RecordedEntries;
   /** Calibration states' total sigma per step: one Float64Array per state index listed in `calibrationStates`. */
@@ -29,6 +33,8 @@ export interface CovarianceHistory {
   calibrationSigma: Float64Array[];
   /** Total P after the last step, row-major. */
   finalCovariance: Float64Array;
+  /** Each source's P_s after the last step (empty without contributions). */
+  finalSourceCovariances: Float64Array[];
   /** Scalar measurements processed, by sensor id. */
   measurementCounts: Record<string, number>;
   /** Numerical problems, first occurrence of each kind; empty when healthy. */
@@ -37,8 +43,21 @@ export interface CovarianceHistory {
 
 /** Options of {@link runCovariance}. */
 export interface RunOptions {
-  /** Carry every source's P_s (default true); false runs the total only, about S + 1 times faster. */
+  /** Carry every source's P_s (default true); false runs the total only (what sizing needs). */
   contributions?: boolean;
+}
+
+/** Mutable state of one run. */
+interface RunState {
+  n: number;
+  plan: SourceStorage;
+  mats: Float64Array;
+  vecs: Float64Array;
+  scratch: Float64Array;
+  u: Float64Array;
+  gain: Float64Array;
+  /** Per dense slot after the total: R owned by that slot's source for the current measurement. */
+  rOfSlot: Float64Array;
 }
 
 /**
@@ -47,84 +66,74 @@ export interface RunOptions {
  * same Φ and gains with only its own P0, Q_d and R pieces, so Σ P_s = P.
  */
 export function runCovariance(model: ErrorModel, traj: NominalTrajectory, options: RunOptions = {}): CovarianceHistory {
-  const n = model.states.length, nn = n * n;
-  // Without contributions only the total is carried (sizing needs nothing else).
-  const S = options.contributions === false ? 0 : model.sources.length;
+  const contributions = options.contributions !== false;
+  const n = model.states.length;
+  const S = contributions ? model.sources.length : 0;
   const steps = traj.tS.length;
   const schedule = scheduleMeasurements(model, traj);
-  const mats = new Float64Array((S + 1) * nn);
-  initialise(model, mats, nn, S);
+  const plan = planSourceStorage(model, contributions);
+  const st: RunState = {
+    n, plan, mats: new Float64Array(plan.denseCount * n * n), vecs: new Float64Array(Math.max(1, plan.vectors) * n),
+    scratch: new Float64Array(n * n), u: new Float64Array(n), gain: new Float64Array(n), rOfSlot: new Float64Array(plan.denseCount),
+  };
+  initialiseStorage(model, plan, st.mats, st.vecs, contributions);
   const rec = allocateEntries((S + 1) * steps);
-  const calibrationStates = model.states.flatMap((st, i) => (st.calibration ? [i] : []));
+  const calibrationStates = model.states.flatMap((s, i) => (s.calibration ? [i] : []));
   const calibrationSigma = calibrationStates.map(() => new Float64Array(steps));
-  const scratch = new Float64Array(nn);
-  const work = { u: new Float64Array(n), gain: new Float64Array(n) };
   const issues: CovarianceIssue[] = [];
   const counts: Record<string, number> = {};
-  const cache = new Map<string, StepDiscretisation>();
+  const cache = new DiscretisationCache(model, traj);
 
   for (let k = 0; k < steps; k++) {
-    if (k > 0) {
-      for (const piece of stepPieces(traj, k)) {
-        let d = piece.cacheKey ? cache.get(piece.cacheKey) : undefined;
-        if (!d) {
-          d = discretiseStep(model, piece.speedMps, piece.turnRateRadps, piece.lengthS);
-          if (piece.cacheKey) cache.set(piece.cacheKey, d);
-        }
-        propagateAll(mats, S, nn, d, scratch);
-      }
-    }
+    if (k > 0) for (const d of cache.forStep(k)) propagateAll(st, d);
     for (const m of schedule[k]) {
-      if (updateAll(mats, S, n, m, work)) counts[m.sensorId] = (counts[m.sensorId] ?? 0) + 1;
+      if (updateAll(st, m)) counts[m.sensorId] = (counts[m.sensorId] ?? 0) + 1;
       else noteIssue(issues, { kind: 'singular-innovation', tS: traj.tS[k], detail: `${m.key}: innovation variance is not positive` });
     }
-    record(model, mats, S, nn, k, steps, rec);
-    calibrationStates.forEach((i, c) => (calibrationSigma[c][k] = Math.sqrt(Math.max(0, mats[i * n + i]))));
-    const issue = checkCovariance(mats, 0, n, traj.tS[k], scratch);
+    record(model, st, S, k, steps, rec);
+    calibrationStates.forEach((i, c) => (calibrationSigma[c][k] = Math.sqrt(Math.max(0, st.mats[i * n + i]))));
+    const issue = checkCovariance(st.mats, 0, n, traj.tS[k], st.scratch);
     if (issue) noteIssue(issues, issue);
   }
   return {
     steps, sourceCount: S, entries: rec, calibrationStates, calibrationSigma,
-    finalCovariance: mats.slice(0, nn), measurementCounts: counts, issues,
+    finalCovariance: st.mats.slice(0, n * n),
+    finalSourceCovariances: Array.from({ length: S }, (_, s) => sourceMatrix(plan, st.mats, st.vecs, n, s)),
+    measurementCounts: counts, issues,
   };
 }
 
-function initialise(model: ErrorModel, mats: Float64Array, nn: number, S: number): void {
-  const n = model.states.length;
-  model.sources.forEach((src, s) => {
-    for (const { state, varianceSI } of src.initialVariance) {
-      if (s < S) mats[(s + 1) * nn + state * n + state] += varianceSI;
-      mats[state * n + state] += varianceSI;
-    }
+function propagateAll(st: RunState, d: StepDiscretisation): void {
+  const nn = st.n * st.n;
+  d.propagate(st.mats, 0, d.phi.val, st.scratch);
+  addDense(st.mats, 0, d.qdTotal);
+  st.plan.denseSources.forEach((s, j) => {
+    const off = (j + 1) * nn;
+    d.propagate(st.mats, off, d.phi.val, st.scratch);
+    addSparse(st.mats, off, d.qdBySource[s]);
   });
-}
-
-function propagateAll(mats: Float64Array, S: number, nn: number, d: StepDiscretisation, scratch: Float64Array): void {
-  propagateInPlace(mats, 0, d.phi, scratch);
-  addDense(mats, 0, d.qdTotal);
-  for (let s = 0; s < S; s++) {
-    const off = (s + 1) * nn;
-    propagateInPlace(mats, off, d.phi, scratch);
-    addSparse(mats, off, d.qdBySource[s]);
-  }
+  propagateVectors(st.vecs, st.plan.vectors, d.phi, st.scratch);
 }
 
 /** One scalar update of the total and every source; false (and nothing changed) when the innovation variance is not positive. */
-function updateAll(mats: Float64Array, S: number, n: number, m: ScheduledMeasurement, w: { u: Float64Array; gain: Float64Array }): boolean {
+function updateAll(st: RunState, m: ScheduledMeasurement): boolean {
+  const { n, mats, u, gain, plan } = st;
   const nn = n * n;
-  const hph = multiplySparseVector(mats, 0, n, m.hIdx, m.hVal, w.u);
+  const hph = multiplySparseVector(mats, 0, n, m.hIdx, m.hVal, u);
   const innovation = hph + m.rTotal;
   if (!(innovation > 0) || !Number.isFinite(innovation)) return false;
-  for (let i = 0; i < n; i++) w.gain[i] = w.u[i] / innovation;
-  const gain = w.gain;
-  josephUpdateInPlace(mats, 0, n, gain, w.u, hph, m.rTotal);
-  for (let s = 0; s < S; s++) {
-    const off = (s + 1) * nn;
-    const hxh = multiplySparseVector(mats, off, n, m.hIdx, m.hVal, w.u);
-    let r = 0;
-    for (let p = 0; p < m.rSources.length; p++) if (m.rSources[p] === s) r += m.rVariances[p];
-    josephUpdateInPlace(mats, off, n, gain, w.u, hxh, r);
+  for (let i = 0; i < n; i++) gain[i] = u[i] / innovation;
+  josephUpdateInPlace(mats, 0, n, gain, u, hph, m.rTotal);
+  st.rOfSlot.fill(0);
+  for (let p = 0; p < m.rSources.length; p++) {
+    const slot = plan.denseSlot[m.rSources[p]];
+    if (slot > 0) st.rOfSlot[slot] += m.rVariances[p];
   }
+  for (let slot = 1; slot < plan.denseCount; slot++) {
+    const hxh = multiplySparseVector(mats, slot * nn, n, m.hIdx, m.hVal, u);
+    josephUpdateInPlace(mats, slot * nn, n, gain, u, hxh, st.rOfSlot[slot]);
+  }
+  updateVectors(st.vecs, plan.vectors, n, m.hIdx, m.hVal, gain);
   return true;
 }
 
@@ -135,17 +144,26 @@ function allocateEntries(len: number): RecordedEntries {
   };
 }
 
-function record(model: ErrorModel, mats: Float64Array, S: number, nn: number, k: number, steps: number, rec: RecordedEntries): void {
-  const n = model.states.length;
+function record(model: ErrorModel, st: RunState, S: number, k: number, steps: number, rec: RecordedEntries): void {
+  const { n, mats, vecs, plan } = st;
   const { along, cross, heading, speedScale } = model.core;
   for (let m = 0; m <= S; m++) {
-    const off = m * nn;
     const at = m * steps + k;
-    rec.alongAlong[at] = mats[off + along * n + along];
-    rec.crossCross[at] = mats[off + cross * n + cross];
-    rec.alongCross[at] = mats[off + along * n + cross];
-    rec.headingHeading[at] = mats[off + heading * n + heading];
-    rec.speedScale[at] = speedScale >= 0 ? mats[off + speedScale * n + speedScale] : 0;
+    const slot = m === 0 ? 0 : plan.denseSlot[m - 1];
+    if (slot >= 0) {
+      const o = slot * n * n;
+      rec.alongAlong[at] = mats[o + along * n + along];
+      rec.crossCross[at] = mats[o + cross * n + cross];
+      rec.alongCross[at] = mats[o + along * n + cross];
+      rec.headingHeading[at] = mats[o + heading * n + heading];
+      rec.speedScale[at] = speedScale >= 0 ? mats[o + speedScale * n + speedScale] : 0;
+    } else {
+      rec.alongAlong[at] = sourceEntry(plan, mats, vecs, n, m - 1, along, along);
+      rec.crossCross[at] = sourceEntry(plan, mats, vecs, n, m - 1, cross, cross);
+      rec.alongCross[at] = sourceEntry(plan, mats, vecs, n, m - 1, along, cross);
+      rec.headingHeading[at] = sourceEntry(plan, mats, vecs, n, m - 1, heading, heading);
+      rec.speedScale[at] = speedScale >= 0 ? sourceEntry(plan, mats, vecs, n, m - 1, speedScale, speedScale) : 0;
+    }
   }
 }
 

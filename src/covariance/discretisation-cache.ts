@@ -1,0 +1,41 @@
+import type { ErrorModel } from './error-model';
+import { TIME_SLACK_S, type NominalTrajectory } from '../mission/nominal-trajectory';
+import { discretiseStep, type StepDiscretisation } from './discretise-step';
+import { stepPieces } from './step-pieces';
+
+/**
+ * Φ and Q_d for every step of a run, computed once per constant-speed
+ * segment for full steps (ENGINE.md §4: the error dynamics are time
+ * invariant in the path frame there) and per piece where a step straddles a
+ * segment boundary or lies on a speed ramp.
+ */
+export class DiscretisationCache {
+  private readonly perSegment: (StepDiscretisation | undefined)[];
+  private readonly byKey = new Map<string, StepDiscretisation>();
+  private segment = 0;
+
+  constructor(private readonly model: ErrorModel, private readonly traj: NominalTrajectory) {
+    this.perSegment = new Array(traj.segments.length);
+  }
+
+  /** The discretisations that carry P from t_{k-1} to t_k, in order; steps must be asked for in increasing k. */
+  forStep(k: number): StepDiscretisation[] {
+    const { tS, segments, stepS } = this.traj;
+    const t0 = tS[k - 1], t1 = tS[k];
+    while (this.segment < segments.length - 1 && t0 >= segments[this.segment].endS - TIME_SLACK_S) this.segment++;
+    const seg = segments[this.segment];
+    const constant = seg.speedStartMps === seg.speedEndMps;
+    if (constant && t1 <= seg.endS + TIME_SLACK_S && Math.abs(t1 - t0 - stepS) <= 1e-9 * stepS) {
+      const i = this.segment;
+      this.perSegment[i] ??= discretiseStep(this.model, seg.speedStartMps, seg.turnRateRadps, stepS);
+      return [this.perSegment[i]!];
+    }
+    return stepPieces(this.traj, k).map((piece) => {
+      const cached = piece.cacheKey ? this.byKey.get(piece.cacheKey) : undefined;
+      if (cached) return cached;
+      const d = discretiseStep(this.model, piece.speedMps, piece.turnRateRadps, piece.lengthS);
+      if (piece.cacheKey) this.byKey.set(piece.cacheKey, d);
+      return d;
+    });
+  }
+}

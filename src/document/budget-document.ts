@@ -1,0 +1,134 @@
+/**
+ * The budget document: the JSON workbook an engineer keeps in git. These
+ * types mirror `budgets/budget.schema.json` (the published schema, which is
+ * the one authority on shape and key order) and, where they can, the field
+ * names of the engine's {@link BudgetInput}, so the mapping is one to one.
+ *
+ * A cell holds a number or a formula text starting with "="; units sit
+ * beside every value. Nothing derived is stored.
+ */
+import type { ConfidenceLevel, QuantityName, SensorKind, SourceKind } from '../inputs/budget-input';
+
+/** The value of `format` in every budget document. */
+export const FORMAT_NAME = 'sigma-ledger-budget';
+
+/** The newest format version this code reads and writes. */
+export const FORMAT_VERSION = 1;
+
+/** A value cell: a number, or a formula text starting with "=". */
+export type Cell = number | string;
+
+/** A value cell with the unit it is written in (`{ value: "=cruiseSpeed", unit: "m/s" }`). */
+export interface QuantityCell {
+  value: Cell;
+  unit: string;
+}
+
+/** A value formulas use by name; not an error source. */
+export interface NamedValue extends QuantityCell {
+  note?: string;
+}
+
+/** The start-pose uncertainty: an error source of its own (`mission.initialPosition`). */
+export interface InitialPoseSource extends QuantityCell {
+  provenance: string;
+  assumed: boolean;
+  note?: string;
+}
+
+/** One leg of the nominal path. */
+export interface SegmentEntry {
+  id?: string;
+  duration: QuantityCell;
+  speed: QuantityCell;
+  speedEnd?: QuantityCell;
+  turnRate: QuantityCell;
+  note?: string;
+}
+
+/** Start pose, its uncertainty and the legs that follow. */
+export interface MissionEntry {
+  note?: string;
+  start: { north: QuantityCell; east: QuantityCell; heading: QuantityCell };
+  initialPosition: InitialPoseSource;
+  initialHeading: InitialPoseSource;
+  segments: SegmentEntry[];
+}
+
+/** A known landmark (range-bearing sensors). */
+export interface LandmarkEntry {
+  id: string;
+  north: QuantityCell;
+  east: QuantityCell;
+  note?: string;
+}
+
+/** A span of mission time in which an aiding sensor gives nothing. */
+export interface OutageEntry {
+  id?: string;
+  start: QuantityCell;
+  end: QuantityCell;
+  note?: string;
+}
+
+/** One row: one error source. The row's own `value` and `unit` are its magnitude. */
+export interface SourceRow extends QuantityCell {
+  id: string;
+  kind: SourceKind;
+  correlationTime?: QuantityCell;
+  rate?: QuantityCell;
+  biasForm?: 'floor' | 'flicker-coefficient';
+  densitySides?: 'one' | 'two';
+  quantum?: 'rate' | 'angle';
+  multipathModel?: 'states' | 'folded';
+  component?: 'range' | 'bearing';
+  provenance: string;
+  assumed: boolean;
+  note?: string;
+}
+
+/** One sensor and its rows. */
+export interface SensorEntry {
+  id: string;
+  kind: SensorKind;
+  note?: string;
+  rate: QuantityCell;
+  observables?: 'range' | 'bearing' | 'range-bearing';
+  maxRange?: QuantityCell;
+  fieldOfView?: QuantityCell;
+  landmarks?: LandmarkEntry[];
+  outages?: OutageEntry[];
+  sources: SourceRow[];
+}
+
+/** A limit on a reported quantity. */
+export interface RequirementEntry {
+  id: string;
+  quantity: QuantityName;
+  level: ConfidenceLevel;
+  limit: QuantityCell;
+  window?: { start: QuantityCell; end: QuantityCell };
+  note?: string;
+}
+
+/** A named mission time. */
+export interface CheckpointEntry {
+  id: string;
+  time: QuantityCell;
+  note?: string;
+}
+
+/** A whole budget document of the current format version. */
+export interface BudgetDocument {
+  $schema?: string;
+  format: typeof FORMAT_NAME;
+  formatVersion: typeof FORMAT_VERSION;
+  title: string;
+  description?: string;
+  settings: { step: QuantityCell };
+  values?: Record<string, NamedValue>;
+  mission: MissionEntry;
+  sensors: SensorEntry[];
+  requirements?: RequirementEntry[];
+  checkpoints?: CheckpointEntry[];
+}
