@@ -21,7 +21,10 @@ export interface SizingResult {
   requirementId: string;
   sourceId: string;
   unit: string;
-  /** 'bounded': largest passing value found; 'always-passes': no limit up to `largestTried`; 'never-passes': fails even at zero. */
+  /**
+   * 'bounded': largest passing value found; 'always-passes': it passes up to the
+   * largest value tried (see `stoppedBecause`); 'never-passes': fails even at zero.
+   */
   outcome: 'bounded' | 'always-passes' | 'never-passes';
   /** Largest value known to pass (0 for never-passes). */
   largestPassing: number;
@@ -32,6 +35,8 @@ export interface SizingResult {
   atLargestPassing?: RequirementResult;
   atSmallestFailing?: RequirementResult;
   trials: number;
+  /** For 'always-passes': why the search stopped (the row's valid range, or the doubling limit). */
+  stoppedBecause?: string;
 }
 
 const MAX_DOUBLINGS = 60;
@@ -60,10 +65,16 @@ export function sizeSource(input: BudgetInput, requirementId: string, sourceId: 
   let hi = row.value.value > 0 ? row.value.value : 1;
   let hiResult = trial(hi);
   for (let d = 0; hiResult.verdict === 'pass'; d++) {
-    if (d >= MAX_DOUBLINGS) return { ...base, outcome: 'always-passes', largestPassing: hi, tolerance: 0, atLargestPassing: hiResult, trials };
     lo = hi; loResult = hiResult;
+    const stop = (why: string): SizingResult => ({ ...base, outcome: 'always-passes', largestPassing: lo, tolerance: 0, atLargestPassing: loResult, trials, stoppedBecause: why });
+    if (d >= MAX_DOUBLINGS) return stop(`still passing after ${MAX_DOUBLINGS} doublings`);
     hi *= 2;
-    hiResult = trial(hi);
+    try {
+      hiResult = trial(hi);
+    } catch (e) {
+      if (e instanceof InputError) return stop(`the next value, ${hi} ${row.value.unit}, is outside the row's valid range (${e.message})`);
+      throw e;
+    }
   }
   while (hi - lo > tolerance * hi) {
     const mid = 0.5 * (lo + hi);
