@@ -1,7 +1,7 @@
 import { InputError } from '../errors';
 import type { SourceInput } from '../inputs/budget-input';
 import type { ConversionStep } from '../covariance/error-model';
-import type { DimensionName } from '../units';
+import { formatSignificant, type DimensionName } from '../units';
 import { flickerCoefficientToFloor, gaussMarkovSigmaFromAllanFloor, GM_ALLAN_PEAK_RATIO } from './gauss-markov-allan';
 import { readMagnitude, readPositive, type SourceKindSpec } from './source-kind';
 
@@ -45,9 +45,9 @@ export function resolveBiasInstability(row: SourceInput, dimension: DimensionNam
   const flicker = row.biasForm === 'flicker-coefficient';
   const floor = flicker ? flickerCoefficientToFloor(value) : value;
   const sigmaSI = gaussMarkovSigmaFromAllanFloor(floor);
-  const ratio = GM_ALLAN_PEAK_RATIO.toPrecision(10);
+  const ratio = formatSignificant(GM_ALLAN_PEAK_RATIO, 10);
   const derivation =
-    (flicker ? `floor = 0.6642825 × B = ${floor.toPrecision(6)}; ` : '') +
-    `σ = floor / ${ratio} = ${sigmaSI.toPrecision(6)}; PSD = 2σ²/T with T = ${correlationTimeS} s`;
+    (flicker ? `floor = 0.6642825 × B = ${formatSignificant(floor, 6)}; ` : '') +
+    `σ = floor / ${ratio} = ${formatSignificant(sigmaSI, 6)}; PSD = 2σ²/T with T = ${correlationTimeS} s`;
   return { sigmaSI, correlationTimeS, psdSI: (2 * sigmaSI * sigmaSI) / correlationTimeS, derivation, conversions };
 }

@@ -1,6 +1,6 @@
 import type { SourceInput } from '../inputs/budget-input';
 import type { ConversionStep } from '../covariance/error-model';
-import type { DimensionName } from '../units';
+import { formatSignificant, type DimensionName } from '../units';
 import { pickDimension, readMagnitude, rowRateHz, type SourceKindSpec } from './source-kind';
 
 /** White noise: a random walk coefficient / noise density, or a per-sample sigma at an output rate. */
@@ -51,7 +51,7 @@ export function resolveWhiteNoise(row: SourceInput, forms: WhiteNoiseForms, sens
     const psdSI = coefficient * coefficient;
     const rateHz = rowRateHz(row, sensorRateHz, path, conversions);
     const derivation = oneSided
-      ? `one-sided density ${v.toPrecision(6)} / √2 = ${coefficient.toPrecision(6)}; PSD = coefficient²`
+      ? `one-sided density ${formatSignificant(v, 6)} / √2 = ${formatSignificant(coefficient, 6)}; PSD = coefficient²`
       : `PSD = coefficient² (two-sided, IEEE Std 952)`;
     return { psdSI, perSampleVarianceSI: psdSI * rateHz, rateHz, derivation, conversions };
   }
@@ -60,7 +60,7 @@ export function resolveWhiteNoise(row: SourceInput, forms: WhiteNoiseForms, sens
     psdSI: (v * v) / rateHz,
     perSampleVarianceSI: v * v,
     rateHz,
-    derivation: `per-sample sigma ${v.toPrecision(6)} at ${rateHz} Hz: variance σ², PSD σ²/f_s`,
+    derivation: `per-sample sigma ${formatSignificant(v, 6)} at ${rateHz} Hz: variance σ², PSD σ²/f_s`,
     conversions,
   };
 }

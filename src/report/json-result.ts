@@ -1,0 +1,90 @@
+import type { BudgetResult } from '../pipeline';
+import type { VarianceQuantity } from '../budget/budget-series';
+import { CAUTION } from './caution';
+import { DISPLAY, varianceFactor } from './display-units';
+import { traceNoise, type NoiseTrace } from './noise-trace';
+
+/** Keys of the per-step series in the JSON result, with the variance quantity each reads. */
+const SERIES_KEYS: [string, VarianceQuantity][] = [
+  ['heading_sigma_deg', 'heading'], ['speed_sigma_mps', 'speed'], ['north_sigma_m', 'north'], ['east_sigma_m', 'east'],
+  ['drms_m', 'drms'], ['along_sigma_m', 'along-track'], ['cross_sigma_m', 'cross-track'],
+];
+
+/** Short names of the quantities under `contributions`. */
+const CONTRIBUTION_KEYS: Record<VarianceQuantity, string> = {
+  heading: 'heading', speed: 'speed', north: 'north', east: 'east', drms: 'drms', 'along-track': 'along', 'cross-track': 'cross',
+};
+
+/** The machine-readable result of `sigma-ledger run --json` (documented in the README). */
+export interface JsonResult {
+  format: 'sigma-ledger-result';
+  formatVersion: 1;
+  title: string;
+  caution: string;
+  mission: { duration_s: number; step_s: number; states: string[]; sources: { id: string; sensor: string; kind: string }[] };
+  series: Record<string, number[]>;
+  contributions: Record<string, Record<string, number[]>>;
+  calibration: { state: string; unit: string; sigma: number[] }[];
+  requirements: unknown[];
+  checkpoints: unknown[];
+  noise: NoiseTrace;
+  status: { healthy: boolean; issues: BudgetResult['history']['issues'] };
+}
+
+/**
+ * Builds the JSON result. `every` keeps every n-th step (and always the
+ * last) so long missions stay small; contributions are variances in the
+ * display unit squared (deg², (m/s)², m²) and sum to the square of the
+ * matching sigma series.
+ */
+export function buildJsonResult(result: BudgetResult, title: string, every = 1): JsonResult {
+  const keep = keptSteps(result.series.tS.length, every);
+  const pick = (a: ArrayLike<number>, f = (x: number) => x) => keep.map((k) => f(a[k]));
+  const series: Record<string, number[]> = { t_s: pick(result.series.tS) };
+  const contributions: Record<string, Record<string, number[]>> = {};
+  for (const [key, q] of SERIES_KEYS) {
+    const s = result.series.quantities[q];
+    if (!s) continue;
+    const f = varianceFactor(q);
+    series[key] = pick(s.total, (v) => Math.sqrt(Math.max(0, v * f)));
+    contributions[CONTRIBUTION_KEYS[q]] = Object.fromEntries(s.bySource.map((b, i) => [result.model.sources[i].id, pick(b, (v) => v * f)]));
+  }
+  if (result.series.quantities.drms) {
+    series.cep_m = pick(result.series.cepM);
+    series.r95_m = pick(result.series.r95M);
+  }
+  return {
+    format: 'sigma-ledger-result', formatVersion: 1, title, caution: CAUTION,
+    mission: {
+      duration_s: result.mission.durationS, step_s: result.trajectory.stepS,
+      states: result.model.states.map((s) => s.name),
+      sources: result.model.sources.map((s) => ({ id: s.id, sensor: s.sensorId, kind: s.kind })),
+    },
+    series, contributions,
+    calibration: result.history.calibrationStates.map((i, c) => ({
+      state: result.model.states[i].name, unit: result.model.states[i].unitSI, sigma: pick(result.history.calibrationSigma[c]),
+    })),
+    requirements: result.requirements.map((r) => ({
+      id: r.id, quantity: r.quantity, level: r.level, limit: r.limit.value, unit: r.limit.unit, verdict: r.verdict, margin: r.margin,
+      worst: r.worstValue, worst_t_s: r.worstTimeS, window_s: [r.windowStartS, r.windowEndS],
+      outages: r.outages.map((o) => ({ sensor: o.sensorId, outage: o.outageId, start_s: o.startS, end_s: o.endS, timeToExceed_s: o.timeToExceedS })),
+    })),
+    checkpoints: result.checkpoints.map((c) => ({
+      id: c.id, t_s: c.tS,
+      budgets: c.quantities.map((qb) => ({
+        quantity: CONTRIBUTION_KEYS[qb.quantity], unit: DISPLAY[qb.quantity].unit, sigma: Math.sqrt(varianceFactor(qb.quantity)) * qb.totalSigmaSI,
+        sources: qb.shares.map((s) => ({ id: s.sourceId, sigma: Math.sqrt(varianceFactor(qb.quantity)) * s.sigmaSI, share: s.fraction })),
+      })),
+    })),
+    noise: traceNoise(result.model),
+    status: { healthy: result.history.issues.length === 0, issues: result.history.issues },
+  };
+}
+
+function keptSteps(count: number, every: number): number[] {
+  const stride = Math.max(1, Math.floor(every));
+  const keep: number[] = [];
+  for (let k = 0; k < count; k += stride) keep.push(k);
+  if (keep[keep.length - 1] !== count - 1) keep.push(count - 1);
+  return keep;
+}

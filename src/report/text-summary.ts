@@ -1,0 +1,106 @@
+import type { BudgetResult } from '../pipeline';
+import type { RequirementResult } from '../budget/requirements';
+import type { CheckpointBudget } from '../budget/checkpoints';
+import { formatSignificant } from '../units';
+import { CAUTION } from './caution';
+import { DISPLAY, sigmaForDisplay } from './display-units';
+import { traceNoise, type TracedEntry } from './noise-trace';
+
+/** What the summary needs besides the result. */
+export interface SummaryContext {
+  title: string;
+  fileName: string;
+}
+
+const fmt = (x: number) => formatSignificant(x, 4);
+const time = (s: number) => `${formatSignificant(s, 6)} s`;
+
+/**
+ * The readable summary `sigma-ledger run` prints: requirements with verdict,
+ * margin and time-to-exceed per outage; the budget at each checkpoint with
+ * sources sorted by share; the R, Q and P0 used, traced to rows; the
+ * calibration states' final sigma; numerical status; the caution.
+ */
+export function formatSummary(result: BudgetResult, ctx: SummaryContext): string {
+  return [
+    `Sigma Ledger budget: ${ctx.title}`,
+    `file: ${ctx.fileName}; mission ${time(result.mission.durationS)}, step ${time(result.trajectory.stepS)}, ` +
+      `${result.model.states.length} states, ${result.model.sources.length} sources`,
+    `CAUTION: ${CAUTION}`,
+    '',
+    ...requirementLines(result.requirements),
+    '',
+    ...result.checkpoints.flatMap(checkpointLines),
+    ...calibrationLines(result),
+    '',
+    ...traceLines(result),
+    '',
+    ...statusLines(result),
+  ].join('\n') + '\n';
+}
+
+function requirementLines(reqs: RequirementResult[]): string[] {
+  if (reqs.length === 0) return ['REQUIREMENTS: none given'];
+  const held = reqs.filter((r) => r.verdict === 'pass').length;
+  const lines = [`REQUIREMENTS: ${held} of ${reqs.length} hold`];
+  for (const r of reqs) {
+    const unit = r.limit.unit;
+    lines.push(
+      `  [${r.verdict.toUpperCase()}] ${r.id}: ${r.quantity} (${r.level}) <= ${r.limit.value} ${unit} over ${time(r.windowStartS)} to ${time(r.windowEndS)}; ` +
+        `worst ${fmt(r.worstValue)} ${unit} at ${time(r.worstTimeS)}, margin ${fmt(r.margin)} ${unit}`,
+    );
+    for (const o of r.outages) {
+      const held = o.timeToExceedS === null ? 'holds throughout' : `breaks ${fmt(o.timeToExceedS)} s after it begins`;
+      lines.push(`      ${o.sensorId} outage "${o.outageId}" (${time(o.startS)} to ${time(o.endS)}): ${held}`);
+    }
+  }
+  return lines;
+}
+
+function checkpointLines(cp: CheckpointBudget): string[] {
+  const lines = [`BUDGET at ${cp.id} (t = ${time(cp.tS)}), 1σ, sources by share of variance:`];
+  for (const qb of cp.quantities) {
+    const unit = DISPLAY[qb.quantity].unit;
+    lines.push(`  ${DISPLAY[qb.quantity].label}: ${fmt(sigmaForDisplay(qb.quantity, qb.totalSigmaSI))} ${unit}`);
+    for (const s of qb.shares) {
+      if (s.fraction < 0.0005) continue;
+      lines.push(`      ${(100 * s.fraction).toFixed(1).padStart(5)} %  ${fmt(sigmaForDisplay(qb.quantity, s.sigmaSI)).padStart(9)} ${unit}  ${s.sourceId}`);
+    }
+  }
+  lines.push('');
+  return lines;
+}
+
+function calibrationLines(result: BudgetResult): string[] {
+  const h = result.history;
+  if (h.calibrationStates.length === 0) return [];
+  const last = h.steps - 1;
+  const lines = ['CALIBRATION STATES (1σ at the start -> at the end, SI):'];
+  h.calibrationStates.forEach((i, c) => {
+    const st = result.model.states[i];
+    lines.push(`  ${st.name}: ${fmt(h.calibrationSigma[c][0])} -> ${fmt(h.calibrationSigma[c][last])} ${st.unitSI}`);
+  });
+  return lines;
+}
+
+function traceLines(result: BudgetResult): string[] {
+  const trace = traceNoise(result.model);
+  const block = (title: string, entries: TracedEntry[]) => [
+    title,
+    ...entries.flatMap((e) => [
+      `  ${e.name}: ${fmt(e.totalSI)} ${e.unitSI}`,
+      ...e.pieces.flatMap((p) => [`      ${fmt(p.valueSI)} from ${p.sourceId}: ${p.derivation}`, ...p.conversions.map((c) => `          ${c}`)]),
+    ]),
+  ];
+  return [
+    ...block('R USED (measurement noise variance per scalar measurement):', trace.r),
+    ...block('Q USED (continuous PSD per noise input; Q_d by Van Loan per step):', trace.q),
+    ...block('P0 USED (initial variance per state):', trace.p0),
+  ];
+}
+
+function statusLines(result: BudgetResult): string[] {
+  const issues = result.history.issues;
+  if (issues.length === 0) return ['NUMERICAL STATUS: covariance stayed finite, symmetric and positive semi-definite'];
+  return ['NUMERICAL STATUS: problems found', ...issues.map((i) => `  ${i.kind} at ${time(i.tS)}: ${i.detail}`)];
+}
