@@ -39,7 +39,8 @@ export interface SizingResult {
   stoppedBecause?: string;
 }
 
-const MAX_DOUBLINGS = 60;
+/** Search at most 2^20 (about a million) times the row's own value: beyond that the linear model is meaningless anyway. */
+const MAX_DOUBLINGS = 20;
 
 /**
  * The largest value of one row's magnitude that still meets a requirement,

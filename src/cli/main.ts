@@ -1,0 +1,79 @@
+import { parseArgs } from 'node:util';
+import { SigmaLedgerError } from '../errors';
+import { CAUTION } from '../report/caution';
+import { checkCommand, EXIT, runCommand, sizeCommand, type Io } from './commands';
+
+const USAGE = `sigma-ledger: sensor error budgets by covariance analysis
+
+usage:
+  sigma-ledger run FILE [--json] [--every N] [--output OUT]
+      the budget's summary: requirement verdicts, margins, time to exceed per
+      outage, budgets at checkpoints, the R, Q and P0 used; --json prints the
+      full result (series thinned to every N-th step with --every)
+  sigma-ledger size FILE --requirement ID --vary SENSOR.ROW [--tolerance REL] [--json]
+      the largest value of one row's magnitude that still meets a requirement
+  sigma-ledger check FILE
+      validate the file and evaluate its cells without running the analysis
+
+exit codes: 0 every requirement holds, 1 some requirement fails, 2 bad input
+
+${CAUTION}
+`;
+
+const OPTIONS = {
+  json: { type: 'boolean', default: false },
+  every: { type: 'string' },
+  output: { type: 'string' },
+  requirement: { type: 'string' },
+  vary: { type: 'string' },
+  tolerance: { type: 'string' },
+  help: { type: 'boolean', default: false },
+} as const;
+
+/** Runs the command line; returns the exit code. Messages for bad input go to `io.err`, never as a stack trace. */
+export async function main(argv: string[], io: Io = processIo()): Promise<number> {
+  try {
+    const { values, positionals } = parseArgs({ args: argv, options: OPTIONS, allowPositionals: true });
+    const [command, file, ...extra] = positionals;
+    if (values.help || command === 'help' || command === undefined) {
+      io.out(USAGE);
+      return command === undefined && !values.help ? EXIT.badInput : EXIT.pass;
+    }
+    if (!file) return usageError(io, `"${command}" needs a budget file`);
+    if (extra.length) return usageError(io, `unexpected argument "${extra[0]}"`);
+    switch (command) {
+      case 'run':
+        return runCommand(file, { json: values.json, every: positiveNumber(values.every, '--every', 1), output: values.output }, io);
+      case 'size':
+        if (!values.requirement || !values.vary) return usageError(io, 'size needs --requirement ID and --vary SENSOR.ROW');
+        return sizeCommand(file, values.requirement, values.vary, positiveNumber(values.tolerance, '--tolerance', 1e-3), values.json, io);
+      case 'check':
+        return checkCommand(file, io);
+      default:
+        return usageError(io, `unknown command "${command}"; use run, size or check`);
+    }
+  } catch (e) {
+    if (e instanceof SigmaLedgerError) {
+      io.err(`error: ${e.message}\n`);
+      return EXIT.badInput;
+    }
+    if (e instanceof TypeError && 'code' in e && String(e.code).startsWith('ERR_PARSE_ARGS')) return usageError(io, e.message);
+    throw e;
+  }
+}
+
+function positiveNumber(text: string | undefined, option: string, fallback: number): number {
+  if (text === undefined) return fallback;
+  const v = Number(text);
+  if (!(v > 0) || !Number.isFinite(v)) throw new SigmaLedgerError(option, `must be a positive number, got "${text}"`);
+  return v;
+}
+
+function usageError(io: Io, message: string): number {
+  io.err(`error: ${message}\n(see sigma-ledger help)\n`);
+  return EXIT.badInput;
+}
+
+function processIo(): Io {
+  return { out: (t) => process.stdout.write(t), err: (t) => process.stderr.write(t) };
+}

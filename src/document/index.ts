@@ -1,0 +1,29 @@
+/**
+ * The budget document: its types, the published schema, parsing with
+ * validation and migration, and canonical writing. Text in, data out: no
+ * file access here.
+ */
+export {
+  FORMAT_NAME,
+  FORMAT_VERSION,
+  type BudgetDocument,
+  type Cell,
+  type CheckpointEntry,
+  type InitialPoseSource,
+  type LandmarkEntry,
+  type MissionEntry,
+  type NamedValue,
+  type OutageEntry,
+  type QuantityCell,
+  type RequirementEntry,
+  type SegmentEntry,
+  type SensorEntry,
+  type SourceRow,
+} from './budget-document';
+export { BudgetFileError } from './budget-file-error';
+export { BUDGET_SCHEMA, budgetValidator } from './budget-schema';
+export { MIGRATIONS, migrateToCurrent, type MigratedJson, type Migration, type MigrationRegistry } from './format-version';
+export { formulaNameProblem, INITIAL_POSE_NAMES, nameKey, RESERVED_SENSOR_ID, rowCellName } from './names';
+export { parseBudgetDocument, type ParseOptions, type ParsedBudget } from './parse-budget-document';
+export { MAX_DEPTH, MAX_TEXT_CHARS, readJson } from './read-json';
+export { serializeBudgetDocument } from './serialize-budget-document';
