@@ -1,5 +1,8 @@
 import { writeFileSync } from 'node:fs';
-import { computeBudget } from '../pipeline';
+import { computeBudget, MAX_STEPS } from '../pipeline';
+import type { BudgetInput } from '../inputs/budget-input';
+import { quantityToSI } from '../inputs/checks';
+import { resolveMission } from '../mission/resolve-mission';
 import { sizeSource, type SizingResult } from '../budget/sizing';
 import { InputError } from '../errors';
 import { formatSummary } from '../report/text-summary';
@@ -31,14 +34,18 @@ export interface RunOptions {
 export function runCommand(file: string, opts: RunOptions, io: Io): number {
   const loaded = loadBudget(file);
   const problems = reportProblems(loaded, io);
+  if (loaded.sheet.blocked) return EXIT.badInput;
   const started = Date.now();
-  const result = withDocumentPaths(loaded, (input) => computeBudget(input));
+  const result = withDocumentPaths(loaded, (input) => {
+    announceLongRun(input, io);
+    return computeBudget(input);
+  });
   if (Date.now() - started > 2000) io.err(`computed ${result.trajectory.tS.length} steps in ${((Date.now() - started) / 1000).toFixed(1)} s\n`);
   const title = loaded.document.title + (problems ? ' (PARTIAL: cells with errors were left out)' : '');
   const text = opts.json
     ? JSON.stringify(buildJsonResult(result, title, opts.every)) + '\n'
     : formatSummary(result, { title, fileName: file });
-  if (opts.output) writeFileSync(opts.output, text);
+  if (opts.output) writeOutput(opts.output, text);
   else io.out(text);
   if (problems) return EXIT.badInput;
   return result.requirements.every((r) => r.verdict === 'pass') ? EXIT.pass : EXIT.fail;
@@ -49,8 +56,12 @@ export function sizeCommand(file: string, requirementId: string, rowId: string, 
   const loaded = loadBudget(file);
   if (reportProblems(loaded, io)) return EXIT.badInput;
   const result = withDocumentPaths(loaded, (input) => {
+    const [sensorId, ...rest] = rowId.split('.');
+    if (!input.sensors.find((s) => s.id === sensorId)?.sources.some((r) => r.id === rest.join('.'))) {
+      throw new InputError('--vary', `no row "${rowId}"; give it as sensorId.rowId, e.g. ${input.sensors[0]?.id}.${input.sensors[0]?.sources[0]?.id}`);
+    }
     if (!input.requirements?.some((r) => r.id === requirementId)) {
-      throw new InputError('--requirement', `no requirement "${requirementId}" in ${file}; it has ${(input.requirements ?? []).map((r) => r.id).join(', ') || 'none'}`);
+      throw new InputError('--requirement', `no requirement "${requirementId}"; the file has ${(input.requirements ?? []).map((r) => r.id).join(', ') || 'none'}`);
     }
     return sizeSource(input, requirementId, rowId, {
       relativeTolerance: tolerance,
@@ -65,9 +76,29 @@ export function sizeCommand(file: string, requirementId: string, rowId: string, 
 export function checkCommand(file: string, io: Io): number {
   const loaded = loadBudget(file);
   if (reportProblems(loaded, io)) return EXIT.badInput;
-  withDocumentPaths(loaded, (input) => computeBudget({ ...input, requirements: input.requirements }));
+  withDocumentPaths(loaded, (input) => computeBudget(input));
   io.out(`${file}: valid (${loaded.sheet.cellValues.size} cells evaluated)\n`);
   return EXIT.pass;
+}
+
+function writeOutput(path: string, text: string): void {
+  try {
+    writeFileSync(path, text);
+  } catch (e) {
+    throw new InputError('--output', `cannot write ${path} (${(e as NodeJS.ErrnoException).code ?? 'error'}): check that its folder exists and is writable`);
+  }
+}
+
+/** Steps above which `run` says on stderr that it is working (about a second of computing). */
+const LONG_RUN_STEPS = 50_000;
+
+function announceLongRun(input: BudgetInput, io: Io): void {
+  try {
+    const steps = resolveMission(input.mission).durationS / quantityToSI(input.step, 'time', 'step');
+    if (steps > LONG_RUN_STEPS && steps <= MAX_STEPS) io.err(`computing ${Math.ceil(steps)} steps with ${input.sensors.reduce((a, s) => a + s.sources.length, 2)} sources...\n`);
+  } catch {
+    // computeBudget reports the problem with its path.
+  }
 }
 
 function reportProblems(loaded: LoadedBudget, io: Io): boolean {

@@ -19,9 +19,12 @@ export interface LoadedBudget {
 export function loadBudget(fileName: string): LoadedBudget {
   let size: number;
   try {
-    size = statSync(fileName).size;
-  } catch {
-    throw new InputError(fileName, 'cannot be read: no such file');
+    const stat = statSync(fileName);
+    if (!stat.isFile()) throw new InputError(fileName, 'is not a file (a folder?); give the path of a budget .json file');
+    size = stat.size;
+  } catch (e) {
+    if (e instanceof InputError) throw e;
+    throw new InputError(fileName, `cannot be read (${(e as NodeJS.ErrnoException).code ?? 'error'}): check the path`);
   }
   // Bytes >= characters for UTF-8, so this refuses before reading anything huge.
   if (size > 4 * MAX_TEXT_CHARS) throw new InputError(fileName, `is ${size} bytes; a budget file may have at most ${MAX_TEXT_CHARS} characters`);
@@ -33,8 +36,11 @@ export function loadBudget(fileName: string): LoadedBudget {
 /** Lines describing every cell error and omitted item, each with its location. */
 export function sheetProblems(loaded: LoadedBudget): string[] {
   const lines = loaded.sheet.cellErrors.map((e) => `${loaded.fileName}: ${e.location.path}: ${e.message}`);
+  if (loaded.sheet.blocked) {
+    lines.push(`error: ${loaded.fileName}: nothing can be computed: ${loaded.sheet.blocked}`);
+    return lines;
+  }
   for (const o of loaded.sheet.omitted) lines.push(`${loaded.fileName}: ${o.path}: left out of the analysis (${o.what})`);
-  if (loaded.sheet.blocked) lines.push(`${loaded.fileName}: nothing can be computed: ${loaded.sheet.blocked}`);
   return lines;
 }
 

@@ -35,9 +35,13 @@ export async function main(argv: string[], io: Io = processIo()): Promise<number
   try {
     const { values, positionals } = parseArgs({ args: argv, options: OPTIONS, allowPositionals: true });
     const [command, file, ...extra] = positionals;
-    if (values.help || command === 'help' || command === undefined) {
+    if (values.help || command === 'help') {
       io.out(USAGE);
-      return command === undefined && !values.help ? EXIT.badInput : EXIT.pass;
+      return EXIT.pass;
+    }
+    if (command === undefined) {
+      io.err(USAGE);
+      return EXIT.badInput;
     }
     if (!file) return usageError(io, `"${command}" needs a budget file`);
     if (extra.length) return usageError(io, `unexpected argument "${extra[0]}"`);
@@ -46,7 +50,7 @@ export async function main(argv: string[], io: Io = processIo()): Promise<number
         return runCommand(file, { json: values.json, every: positiveNumber(values.every, '--every', 1), output: values.output }, io);
       case 'size':
         if (!values.requirement || !values.vary) return usageError(io, 'size needs --requirement ID and --vary SENSOR.ROW');
-        return sizeCommand(file, values.requirement, values.vary, positiveNumber(values.tolerance, '--tolerance', 1e-3), values.json, io);
+        return sizeCommand(file, values.requirement, values.vary, relativeTolerance(values.tolerance), values.json, io);
       case 'check':
         return checkCommand(file, io);
       default:
@@ -66,6 +70,12 @@ function positiveNumber(text: string | undefined, option: string, fallback: numb
   if (text === undefined) return fallback;
   const v = Number(text);
   if (!(v > 0) || !Number.isFinite(v)) throw new SigmaLedgerError(option, `must be a positive number, got "${text}"`);
+  return v;
+}
+
+function relativeTolerance(text: string | undefined): number {
+  const v = positiveNumber(text, '--tolerance', 1e-3);
+  if (v >= 0.5) throw new SigmaLedgerError('--tolerance', `is a relative width and must be below 0.5 (e.g. 0.001), got "${text}"`);
   return v;
 }
 

@@ -16,7 +16,22 @@ export const MAX_DEPTH = 12;
 /** " at line L, column C" (both from 1) for a character offset. */
 function whereIs(text: string, offset: number): string {
   const before = text.slice(0, offset);
-  return ` at line ${before.split('\n').length}, column ${offset - before.lastIndexOf('\n')}`;
+  return `line ${before.split('\n').length}, column ${offset - before.lastIndexOf('\n')}`;
+}
+
+/**
+ * Where JSON.parse stopped: V8 gives "at position N" for some errors and
+ * only a snippet of about ten characters either side for others
+ * (`Unexpected token '}', ..."a": 1, }" is not valid JSON`), so the snippet
+ * is found in the text and its middle taken.
+ */
+function errorOffset(text: string, detail: string): number | undefined {
+  const position = /at position (\d+)/.exec(detail);
+  if (position) return Number(position[1]);
+  const snippet = /, (?:\.\.\.)?"([\s\S]*?)"(?:\.\.\.)? is not valid JSON/.exec(detail)?.[1];
+  if (!snippet) return undefined;
+  const at = text.indexOf(snippet);
+  return at < 0 ? undefined : at + Math.min(10, snippet.length - 1);
 }
 
 /** JSON.parse, its SyntaxError turned into a message with a line and column where the parser gave a position. */
@@ -25,9 +40,10 @@ function parseOrExplain(text: string, fileName: string): unknown {
     return JSON.parse(text);
   } catch (e) {
     const detail = e instanceof Error ? e.message : String(e);
-    const position = /at position (\d+)/.exec(detail);
-    const where = position ? whereIs(text, Number(position[1])) : '';
-    throw new BudgetFileError(fileName, '', `is not valid JSON${where} (${detail}); check for a missing comma, quote or bracket`);
+    const offset = errorOffset(text, detail);
+    const where = offset === undefined ? '' : ` near ${whereIs(text, offset)}`;
+    const reason = detail.replace(/,\s*(?:\.\.\.)?"[\s\S]*$/, '').replace(/ in JSON.*$/, '');
+    throw new BudgetFileError(fileName, '', `is not valid JSON${where}: ${reason}; check for a missing or extra comma, quote or bracket`);
   }
 }
 

@@ -36,6 +36,7 @@ function describeValue(value: unknown): string {
   if (value === null) return 'null';
   if (typeof value === 'string') return `the text ${JSON.stringify(value.length > 40 ? `${value.slice(0, 40)}…` : value)}`;
   if (typeof value === 'object') return 'an object';
+  if (typeof value === 'number' && !Number.isFinite(value)) return 'a number too large for double precision';
   return JSON.stringify(value);
 }
 

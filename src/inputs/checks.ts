@@ -17,7 +17,7 @@ export function quantityToSI(q: Quantity | undefined, expected: DimensionName, p
   if (typeof q.unit !== 'string') {
     throw new InputError(`${path}.unit`, 'must be a unit text such as "deg/h" or "m"');
   }
-  return toSI(q.value, q.unit, expected, path);
+  return toSI(q.value, q.unit, expected, `${path}.unit`);
 }
 
 /** Like {@link quantityToSI}, and the result must be > 0. */

@@ -81,7 +81,8 @@ export function buildJsonResult(result: BudgetResult, title: string, every = 1):
   };
 }
 
-function keptSteps(count: number, every: number): number[] {
+/** Indices of every `every`-th step from 0, plus the last step. */
+export function keptSteps(count: number, every: number): number[] {
   const stride = Math.max(1, Math.floor(every));
   const keep: number[] = [];
   for (let k = 0; k < count; k += stride) keep.push(k);

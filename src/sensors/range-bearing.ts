@@ -68,7 +68,7 @@ function placeRow(
   const dim = pickDimension(row.value, ['length', 'angle'], `${path}.value`);
   const component = dim === 'length' ? 'range' : 'bearing';
   if (row.component !== undefined && row.component !== component) {
-    throw new InputError(`${path}.component`, `is "${row.component}" but the unit "${row.value.unit}" is a ${dim === 'length' ? 'length (range)' : 'angle (bearing)'}`);
+    throw new InputError(`${path}.component`, `is "${row.component}" but the unit '${row.value.unit}' is ${dim === 'length' ? 'a length (a range)' : 'an angle (a bearing)'}`);
   }
   if (row.kind === 'white-noise') {
     const r = resolveWhiteNoise(row, { perSample: dim }, rateHz, path);
@@ -84,6 +84,7 @@ function placeRow(
 }
 
 function resolveLandmarks(sensor: SensorInput, path: string): Landmark[] {
+  if (sensor.landmarks === undefined) throw new InputError(`${path}.landmarks`, 'a range-bearing sensor needs a list of landmarks with id, north and east');
   const list = requireArray(sensor.landmarks, `${path}.landmarks`);
   const seen = new Set<string>();
   return list.map((lm, i) => {

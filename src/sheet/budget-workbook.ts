@@ -40,10 +40,17 @@ function engineConfig(cellCount: number) {
   return { licenseKey: 'gpl-v3', smartRounding: false, maxRows: Math.max(DEFAULT_MAX_ROWS, cellCount) };
 }
 
+/** Spreadsheet functions whose result changes from run to run (HyperFormula's volatile functions). */
+const VOLATILE = /\b(RAND|RANDBETWEEN|NOW|TODAY)\s*\(/i;
+
 /** What a cell must hold, or undefined when it does. */
 function contentProblem(content: unknown): string | undefined {
   if (typeof content === 'number' && Number.isFinite(content)) return undefined;
-  if (typeof content === 'string' && content.startsWith('=') && content.length > 1) return undefined;
+  if (typeof content === 'string' && content.startsWith('=') && content.length > 1) {
+    const volatile = VOLATILE.exec(content.replace(/"[^"]*"/g, '""'));
+    if (volatile) return `uses ${volatile[1].toUpperCase()}(), which gives another number on every run; a budget must be reproducible, so write a number`;
+    return undefined;
+  }
   return `must be a number or a formula starting with '=', got ${JSON.stringify(content) ?? String(content)}`;
 }
 

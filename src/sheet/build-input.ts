@@ -36,7 +36,11 @@ function buildMission(r: QuantityReader, m: MissionEntry, omitted: OmittedItem[]
   }, (s, i) => `segment ${s.id ?? i + 1}`, omitted, kept);
   if (start === undefined) return 'a cell of the start pose (mission.start) has an error';
   if (position === undefined || heading === undefined) return 'a start-pose uncertainty (mission.initialPosition or mission.initialHeading) has an error';
-  if (segments.length === 0) return 'no segment of the mission could be evaluated';
+  if (segments.length < m.segments.length) {
+    const failed = m.segments.findIndex((_s, i) => !kept.includes(i));
+    // Leaving a leg out would shift every later time (outages, checkpoints) and blame the wrong fields.
+    return `mission.segments[${failed}] has a cell error, and the mission's timeline cannot be built without it`;
+  }
   return { start: start as MissionInput['start'], initialSigma: { position, heading }, segments };
 }
 

@@ -2,7 +2,7 @@ import { InputError } from '../errors';
 import { quantityToSI } from '../inputs/checks';
 import type { Quantity, SourceInput, SourceKind } from '../inputs/budget-input';
 import type { ConversionStep } from '../covariance/error-model';
-import { describeConversion, DIMENSIONS, unitDimension, type DimensionName } from '../units';
+import { describeConversion, DIMENSIONS, labelWithArticle, unitDimension, type DimensionName } from '../units';
 
 /** A parameter a source kind declares: its field, the dimensions it accepts and its valid range. */
 export interface ParameterSpec {
@@ -70,7 +70,7 @@ export function pickDimension(q: Quantity | undefined, allowed: DimensionName[],
   }
   const dim = unitDimension(q.unit);
   if (dim !== undefined && allowed.includes(dim)) return dim;
-  const wanted = allowed.map((d) => `${DIMENSIONS[d].label} (${DIMENSIONS[d].picker.slice(0, 3).join(', ')})`).join(' or ');
-  const got = dim === undefined ? `unknown or unsupported unit "${q.unit}"` : `"${q.unit}" is ${DIMENSIONS[dim].label}`;
+  const wanted = allowed.map((d) => `${labelWithArticle(d)} (${DIMENSIONS[d].picker.slice(0, 3).join(', ')})`).join(' or ');
+  const got = dim === undefined ? `unknown or unsupported unit '${q.unit}'` : `'${q.unit}' is ${labelWithArticle(dim)}`;
   throw new InputError(`${path}.unit`, `${got}; expected ${wanted}`);
 }

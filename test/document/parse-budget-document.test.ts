@@ -57,7 +57,7 @@ describe('parseBudgetDocument refuses structural errors with the path of the fir
 
   it('gives a line and column for invalid JSON when the parser reports a position', () => {
     const e = errorOf('{\n  "format": "sigma-ledger-budget",\n}');
-    expect(e.message).toMatch(/is not valid JSON at line 3, column 1/);
+    expect(e.message).toMatch(/is not valid JSON near line 3, column 1/);
   });
 
   it('reports a cell that is neither a number nor a formula at the cell', () => {
