@@ -34,7 +34,7 @@ export function computeBudget(input: BudgetInput): BudgetResult {
   if (!input || typeof input !== 'object') throw new InputError('', 'the budget must be an object');
   const mission = resolveMission(input.mission);
   const stepS = resolveStep(input, mission.durationS);
-  const model = buildErrorModel(input.sensors, mission);
+  const model = buildErrorModel(input.sensors, mission, input.mission.initialSigmaNotes);
   const requirementSpecs = resolveRequirements(input.requirements, mission.durationS);
   const trajectory = buildNominalTrajectory(mission, stepS);
   const history = runCovariance(model, trajectory);

@@ -102,7 +102,7 @@ function evaluateWith(input: BudgetInput, sourceId: string, value: number, requi
   findRow(copy, sourceId).value.value = value;
   const mission = resolveMission(copy.mission);
   const stepS = positiveToSI(copy.step, 'time', 'step');
-  const model = buildErrorModel(copy.sensors, mission);
+  const model = buildErrorModel(copy.sensors, mission, copy.mission.initialSigmaNotes);
   const req = resolveRequirements(copy.requirements, mission.durationS).find((r) => r.id === requirementId);
   if (!req) throw new InputError('requirement', `no requirement "${requirementId}"`);
   const traj = buildNominalTrajectory(mission, stepS);

@@ -57,6 +57,10 @@ export interface ModelSource {
   conversions: ConversionStep[];
   /** Values flagged as assumptions (for example a pre-filled correlation time). */
   assumptions: string[];
+  /** Where the row's numbers came from, as the user wrote it. */
+  provenance?: string;
+  /** True when the row is marked as an assumption (nobody measured it or read it from a datasheet). */
+  assumed: boolean;
 }
 
 /** What a state is, for outputs (units in SI). */

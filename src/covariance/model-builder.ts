@@ -1,3 +1,4 @@
+import type { SourceNote } from '../inputs/budget-input';
 import type {
   CoreStates, ErrorModel, MeasurementStream, ModelSource, NoiseChannel, StateInfo,
 } from './error-model';
@@ -98,12 +99,13 @@ export class ModelBuilder {
   }
 }
 
-/** A fresh source record with no pieces yet. */
-export function emptySource(id: string, sensorId: string, kind: string, label: string): ModelSource {
+/** A fresh source record with no pieces yet, carrying the row's provenance and assumption flag. */
+export function emptySource(id: string, sensorId: string, kind: string, label: string, note: SourceNote = {}): ModelSource {
   return {
     id, sensorId, kind, label,
     initialVariance: [], noise: [], measurementNoise: [],
     headingOutputVarianceSI: 0, speedOutputVarianceSI: 0,
-    conversions: [], assumptions: [],
+    conversions: [], assumptions: note.assumed ? [`${id} is marked as an assumption`] : [],
+    provenance: note.provenance, assumed: note.assumed === true,
   };
 }

@@ -14,6 +14,12 @@ export interface Quantity {
   unit: string;
 }
 
+/** Where a number came from, and whether nobody measured or read it from a datasheet. */
+export interface SourceNote {
+  provenance?: string;
+  assumed?: boolean;
+}
+
 /** One leg of the nominal path: constant turn rate, constant speed or a linear speed ramp. */
 export interface SegmentInput {
   /** Optional label shown in outputs. */
@@ -32,6 +38,8 @@ export interface MissionInput {
   start: { north: Quantity; east: Quantity; heading: Quantity };
   /** 1-sigma uncertainty of the start pose; position is per axis (north and east alike). */
   initialSigma: { position: Quantity; heading: Quantity };
+  /** Where the start-pose sigmas came from, and whether they are assumptions. */
+  initialSigmaNotes?: { position?: SourceNote; heading?: SourceNote };
   segments: SegmentInput[];
 }
 

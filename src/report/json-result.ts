@@ -21,7 +21,10 @@ export interface JsonResult {
   formatVersion: 1;
   title: string;
   caution: string;
-  mission: { duration_s: number; step_s: number; states: string[]; sources: { id: string; sensor: string; kind: string }[] };
+  mission: {
+    duration_s: number; step_s: number; states: string[];
+    sources: { id: string; sensor: string; kind: string; provenance?: string; assumed: boolean }[];
+  };
   series: Record<string, number[]>;
   contributions: Record<string, Record<string, number[]>>;
   calibration: { state: string; unit: string; sigma: number[] }[];
@@ -58,7 +61,7 @@ export function buildJsonResult(result: BudgetResult, title: string, every = 1):
     mission: {
       duration_s: result.mission.durationS, step_s: result.trajectory.stepS,
       states: result.model.states.map((s) => s.name),
-      sources: result.model.sources.map((s) => ({ id: s.id, sensor: s.sensorId, kind: s.kind })),
+      sources: result.model.sources.map((s) => ({ id: s.id, sensor: s.sensorId, kind: s.kind, provenance: s.provenance, assumed: s.assumed })),
     },
     series, contributions,
     calibration: result.history.calibrationStates.map((i, c) => ({

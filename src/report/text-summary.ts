@@ -30,6 +30,7 @@ export function formatSummary(result: BudgetResult, ctx: SummaryContext): string
     '',
     ...requirementLines(result.requirements),
     '',
+    ...assumptionLines(result),
     ...result.checkpoints.flatMap(checkpointLines),
     ...calibrationLines(result),
     '',
@@ -55,6 +56,16 @@ function requirementLines(reqs: RequirementResult[]): string[] {
     }
   }
   return lines;
+}
+
+function assumptionLines(result: BudgetResult): string[] {
+  const assumed = result.model.sources.filter((s) => s.assumed);
+  if (assumed.length === 0) return [];
+  return [
+    `ASSUMED VALUES (nobody measured these or read them from a datasheet; the verdicts rest on them):`,
+    ...assumed.map((s) => `  ${s.id}${s.provenance ? `: ${s.provenance}` : ''}`),
+    '',
+  ];
 }
 
 function checkpointLines(cp: CheckpointBudget): string[] {

@@ -1,6 +1,6 @@
 import { InputError } from '../errors';
 import { requireArray, requireId, requireOneOf } from '../inputs/checks';
-import type { SensorInput } from '../inputs/budget-input';
+import type { MissionInput, SensorInput } from '../inputs/budget-input';
 import { emptySource, ModelBuilder } from '../covariance/model-builder';
 import type { ErrorModel } from '../covariance/error-model';
 import type { ResolvedMission } from '../mission/resolve-mission';
@@ -16,16 +16,17 @@ export const INITIAL_HEADING_ID = 'mission.initialHeading';
  * @throws InputError for a suite the planar model cannot run (no yaw gyro,
  *   two speed inputs, position aiding without a speed input, duplicate ids).
  */
-export function buildErrorModel(sensors: SensorInput[], mission: ResolvedMission): ErrorModel {
+export function buildErrorModel(sensors: SensorInput[], mission: ResolvedMission, missionNotes?: MissionInput['initialSigmaNotes']): ErrorModel {
   const list = requireArray(sensors, 'sensors');
   checkSuite(list);
   const b = new ModelBuilder();
-  const pos = emptySource(INITIAL_POSITION_ID, 'mission', 'initial-position', 'initial position');
+  const notes = missionNotes ?? {};
+  const pos = emptySource(INITIAL_POSITION_ID, 'mission', 'initial-position', 'initial position', notes.position);
   pos.initialVariance.push(
     { state: b.core.along, varianceSI: mission.initialPositionSigmaM ** 2 },
     { state: b.core.cross, varianceSI: mission.initialPositionSigmaM ** 2 },
   );
-  const head = emptySource(INITIAL_HEADING_ID, 'mission', 'initial-heading', 'initial heading');
+  const head = emptySource(INITIAL_HEADING_ID, 'mission', 'initial-heading', 'initial heading', notes.heading);
   head.initialVariance.push({ state: b.core.heading, varianceSI: mission.initialHeadingSigmaRad ** 2 });
   b.sources.push(pos, head);
   list.forEach((sensor, i) => {

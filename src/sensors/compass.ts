@@ -17,7 +17,7 @@ export const compass: SensorKindSpec = {
     const key = `${sensor.id}.heading`;
     const hStates: [number, number][] = [[b.core.heading, 1]];
     eachRow(compass, sensor, ctx, (row, path) => {
-      const src = emptySource(`${sensor.id}.${row.id}`, sensor.id, row.kind, row.id);
+      const src = emptySource(`${sensor.id}.${row.id}`, sensor.id, row.kind, row.id, row);
       if (row.kind === 'white-noise') {
         const r = resolveWhiteNoise(row, { perSample: 'angle' }, rateHz, path);
         src.measurementNoise.push({ measurement: key, varianceSI: r.perSampleVarianceSI, derivation: 'R = σ²' });

@@ -22,7 +22,7 @@ export const gnssPosition: SensorKindSpec = {
     const multipathN: number[] = [];
     const multipathE: number[] = [];
     eachRow(gnssPosition, sensor, ctx, (row, path) => {
-      const src = emptySource(`${sensor.id}.${row.id}`, sensor.id, row.kind, row.id);
+      const src = emptySource(`${sensor.id}.${row.id}`, sensor.id, row.kind, row.id, row);
       if (row.kind === 'white-noise') {
         const r = resolveWhiteNoise(row, { perSample: 'length' }, rateHz, path);
         const derivation = 'R = σ² per axis';

@@ -33,7 +33,7 @@ export const rangeBearing: SensorKindSpec = {
     const observables = requireOneOf(sensor.observables ?? 'range-bearing', ['range', 'bearing', 'range-bearing'] as const, `${ctx.path}.observables`);
     const bias = { range: [] as [number, number][], bearing: [] as [number, number][] };
     eachRow(rangeBearing, sensor, ctx, (row, path) => {
-      const src = emptySource(`${sensor.id}.${row.id}`, sensor.id, row.kind, row.id);
+      const src = emptySource(`${sensor.id}.${row.id}`, sensor.id, row.kind, row.id, row);
       placeRow(b, src, sensor.id, row, rateHz, path, bias);
       b.sources.push(src);
     });

@@ -21,7 +21,7 @@ export const wheelSpeed: SensorKindSpec = {
     const along = b.core.along;
     b.hasSpeedInput = true;
     eachRow(wheelSpeed, sensor, ctx, (row, path) => {
-      const src = emptySource(`${sensor.id}.${row.id}`, sensor.id, row.kind, row.id);
+      const src = emptySource(`${sensor.id}.${row.id}`, sensor.id, row.kind, row.id, row);
       if (row.kind === 'scale-factor') {
         const r = resolveScaleFactor(row, path);
         const s = b.sharedState(`${sensor.id}#sf`, 'speed scale factor', '1', (i) => b.term(along, i, { perSpeed: 1 }));

@@ -23,7 +23,7 @@ export const yawGyro: SensorKindSpec = {
     refuseOutages(sensor, ctx.path);
     const rateHz = sensorRateHz(sensor, ctx.path);
     eachRow(yawGyro, sensor, ctx, (row, path) => {
-      const src = emptySource(`${sensor.id}.${row.id}`, sensor.id, row.kind, row.id);
+      const src = emptySource(`${sensor.id}.${row.id}`, sensor.id, row.kind, row.id, row);
       placeGyroRow(b, src, sensor.id, row, rateHz, path);
       b.sources.push(src);
     });

@@ -41,7 +41,11 @@ function buildMission(r: QuantityReader, m: MissionEntry, omitted: OmittedItem[]
     // Leaving a leg out would shift every later time (outages, checkpoints) and blame the wrong fields.
     return `mission.segments[${failed}] has a cell error, and the mission's timeline cannot be built without it`;
   }
-  return { start: start as MissionInput['start'], initialSigma: { position, heading }, segments };
+  const note = (s: { provenance: string; assumed: boolean }) => ({ provenance: s.provenance, assumed: s.assumed });
+  return {
+    start: start as MissionInput['start'], initialSigma: { position, heading }, segments,
+    initialSigmaNotes: { position: note(m.initialPosition), heading: note(m.initialHeading) },
+  };
 }
 
 function buildRequirements(r: QuantityReader, doc: BudgetDocument, omitted: OmittedItem[], kept: number[]): RequirementInput[] {

@@ -1,0 +1,25 @@
+#!/usr/bin/env node
+// `npm run screenshot`: builds the page, serves it, loads the demo budget in
+// headless Chromium and saves full-page screenshots of each results tab to
+// .test-results/ so anyone can look at the page without a desktop.
+import { mkdirSync } from 'node:fs';
+import { buildSite, launchBrowser, startPreview, URL, waitUntilComputed } from './browser.mjs';
+
+const [width, height] = (process.env.SIZE ?? '1280x800').split('x').map(Number);
+buildSite();
+const server = await startPreview();
+const browser = await launchBrowser();
+try {
+  mkdirSync('.test-results', { recursive: true });
+  const page = await browser.newPage();
+  await page.setViewport({ width, height });
+  await page.goto(URL);
+  await waitUntilComputed(page);
+  await new Promise((r) => setTimeout(r, 300)); // let charts draw
+  const file = `.test-results/screenshot-${width}x${height}.png`;
+  await page.screenshot({ path: file, fullPage: true });
+  console.log(`saved ${file}`);
+} finally {
+  await browser.close();
+  server.kill();
+}
