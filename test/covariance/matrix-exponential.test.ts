@@ -2,18 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { expm as mathjsExpm, matrix } from 'mathjs';
 import { expm } from '../../src/covariance/matrix-exponential';
 import { InputError } from '../../src/errors';
-
-/** Seeded uniform generator on [0, 1) (mulberry32), so failures reproduce. */
-function seededRandom(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+import { seededRandom } from '../fixtures/seeded-random';
 
 function randomMatrix(n: number, scale: number, random: () => number): Float64Array {
   return Float64Array.from({ length: n * n }, () => scale * (2 * random() - 1));

@@ -3,6 +3,7 @@ import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
 import { expm as mathjsExpm, matrix } from 'mathjs';
 import { discretiseVanLoan } from '../../src/covariance/van-loan';
 import { InputError } from '../../src/errors';
+import { seededRandom } from '../fixtures/seeded-random';
 
 const DEG = Math.PI / 180;
 
@@ -30,18 +31,6 @@ function expectSymmetricPsd(qd: Float64Array, n: number): void {
   const eigenvalues = new EigenvalueDecomposition(new Matrix(rows)).realEigenvalues;
   const largest = Math.max(...eigenvalues.map(Math.abs));
   for (const lambda of eigenvalues) expect(lambda).toBeGreaterThanOrEqual(-1e-14 * largest);
-}
-
-/** Seeded uniform generator on [0, 1) (mulberry32). */
-function seededRandom(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
 }
 
 describe('discretiseVanLoan', () => {
