@@ -1,0 +1,36 @@
+// Browser tests (test/web/**/*.test.ts) in Debian's Chromium, served through Vite
+// (HyperFormula's CommonJS modules need Vite's pre-bundling). TOOLCHAIN.md records
+// why each setting is here.
+import { vitePlugin } from '@remcovaes/web-test-runner-vite-plugin';
+import { chromeLauncher } from '@web/test-runner-chrome';
+
+const executablePath = process.env.CHROME_PATH || '/usr/bin/chromium';
+
+export default {
+  files: ['test/web/**/*.test.ts'],
+  nodeResolve: true,
+  concurrency: 1,
+  testFramework: { config: { timeout: 20000 } },
+  testsFinishTimeout: 300000,
+  browsers: [
+    chromeLauncher({
+      launchOptions: {
+        executablePath,
+        headless: true,
+        args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+      },
+    }),
+  ],
+  plugins: [
+    vitePlugin({
+      configFile: false,
+      root: process.cwd(),
+      server: { port: 5174, strictPort: true, host: '127.0.0.1' },
+      worker: { format: 'es' },
+      optimizeDeps: {
+        exclude: ['@web/test-runner-commands'],
+        include: ['lit', 'lit/decorators.js', 'lit/directives/live.js', 'lit/directives/if-defined.js', 'lit/directives/class-map.js', 'chart.js', 'hyperformula', '@open-wc/testing', 'idb', 'ajv'],
+      },
+    }),
+  ],
+};

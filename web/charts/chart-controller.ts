@@ -1,0 +1,62 @@
+import type { ChartDataset, ChartOptions } from 'chart.js';
+import type { ReactiveController, ReactiveControllerHost } from 'lit';
+import { Chart } from './register-charts';
+import { outageBands } from './outage-bands';
+
+/** A line dataset of the findings: values by step, null where there is nothing to draw. */
+export type LineDataset = ChartDataset<'line', (number | null)[]>;
+
+/** What one chart shows: x values (time in s), datasets over them and the options. */
+export interface LineChartData {
+  labels: number[];
+  datasets: LineDataset[];
+  options: ChartOptions<'line'>;
+}
+
+/**
+ * Owns one chart.js line chart for a lit component: creates it on the
+ * first `draw`, then updates it in place (`chart.update('none')`) so a
+ * recompute costs no new chart; destroys it when the host leaves the page
+ * and asks for a redraw when the host comes back. Datasets with the same
+ * label keep their object (and so their shown/hidden state in the legend).
+ */
+export class ChartController implements ReactiveController {
+  /** The chart.js instance, once drawn. */
+  chart?: Chart<'line', (number | null)[], number>;
+
+  constructor(private readonly host: ReactiveControllerHost) {
+    host.addController(this);
+  }
+
+  hostConnected(): void {
+    if (!this.chart) this.host.requestUpdate();
+  }
+
+  hostDisconnected(): void {
+    this.chart?.destroy();
+    this.chart = undefined;
+  }
+
+  /** Draws `data` on `canvas`: a new chart the first time (or on a new canvas), an in-place update afterwards. */
+  draw(canvas: HTMLCanvasElement, data: LineChartData): void {
+    const chart = this.chart;
+    if (!chart || chart.canvas !== canvas) {
+      chart?.destroy();
+      this.chart = new Chart(canvas, {
+        type: 'line',
+        data: { labels: data.labels, datasets: data.datasets },
+        options: data.options,
+        plugins: [outageBands],
+      });
+      return;
+    }
+    const byLabel = new Map(chart.data.datasets.map((d) => [d.label, d]));
+    chart.data.labels = data.labels;
+    chart.data.datasets = data.datasets.map((next) => {
+      const kept = byLabel.get(next.label);
+      return kept ? Object.assign(kept, next) : next;
+    });
+    chart.options = data.options;
+    chart.update('none');
+  }
+}

@@ -1,0 +1,52 @@
+import { LitElement, css, html, nothing } from 'lit';
+import { customElement, property } from 'lit/decorators.js';
+import type { BudgetDocument } from '../../src/document';
+import type { ViewResult } from '../../src/report/view-result';
+import type { DocumentStore } from '../state/document-store';
+import { editorStyles } from '../grid/editor-styles';
+import { blockedWithin } from '../grid/view-lookup';
+import './sl-checkpoint-list';
+import './sl-quantity';
+import './sl-requirement-table';
+
+/**
+ * The "Requirements" tab: the limits the budget must meet, the checkpoints
+ * at which the report prints the budget, and the analysis time step.
+ */
+@customElement('sl-requirements-editor')
+export class SlRequirementsEditor extends LitElement {
+  static override styles = [editorStyles, css`
+    :host { display: block; }
+    .step { display: grid; grid-template-columns: auto 200px 1fr; gap: 8px; align-items: center; }
+  `];
+
+  /** The open document's store; every edit goes through it. */
+  @property({ attribute: false }) store!: DocumentStore;
+  /** The document shown (the store's current one); a new object re-renders. */
+  @property({ attribute: false }) doc?: BudgetDocument;
+  /** The latest view: cell errors and blocking problems. */
+  @property({ attribute: false }) view?: ViewResult;
+
+  override render() {
+    const stepProblem = blockedWithin(this.view, 'settings');
+    return html`
+      <h3>Requirements</h3>
+      <sl-requirement-table .store=${this.store} .doc=${this.doc} .view=${this.view}></sl-requirement-table>
+      <h3>Checkpoints</h3>
+      <sl-checkpoint-list .store=${this.store} .doc=${this.doc} .view=${this.view}></sl-checkpoint-list>
+      <h3>Analysis</h3>
+      <div class="step">
+        <span>Time step</span>
+        <sl-quantity .store=${this.store} .doc=${this.doc} .view=${this.view} path="settings.step" label="Analysis time step" .dimensions=${['time']}></sl-quantity>
+        <span class="hint">of the covariance analysis and of every output series</span>
+      </div>
+      ${stepProblem ? html`<div class="blocked" role="alert">${stepProblem}</div>` : nothing}
+    `;
+  }
+}
+
+declare global {
+  interface HTMLElementTagNameMap {
+    'sl-requirements-editor': SlRequirementsEditor;
+  }
+}

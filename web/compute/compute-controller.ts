@@ -1,0 +1,92 @@
+import type { ReactiveController, ReactiveControllerHost } from 'lit';
+import type { BudgetDocument } from '../../src/document';
+import type { ViewResult } from '../../src/report/view-result';
+import type { ComputeRequest, ComputeResponse } from './protocol';
+
+/** Where the latest recompute stands. */
+export type ComputeStatus = 'idle' | 'pending' | 'complete' | 'error';
+
+/** Quiet time after an edit before recomputing, ms: long enough to skip keystrokes, short enough to feel live. */
+export const DEBOUNCE_MS = 120;
+
+/**
+ * The one path from the page to the engine: debounces edits, keeps at most
+ * one request in the worker, and exposes the latest view with its status.
+ * `stale` is true while the shown view is older than the document.
+ * Fires nothing itself; it asks its host to update.
+ */
+export class ComputeController implements ReactiveController {
+  status: ComputeStatus = 'idle';
+  view?: ViewResult;
+  error?: string;
+  stale = false;
+  /** Worker compute time of the last view, ms. */
+  elapsedMs = 0;
+  /** Called after each new view arrives (tests and the benchmark listen here). */
+  onView?: (view: ViewResult, seq: number) => void;
+
+  private worker?: Worker;
+  private seq = 0;
+  private inFlight?: number;
+  private queued?: BudgetDocument;
+  private timer?: ReturnType<typeof setTimeout>;
+  private waiting = false;
+
+  constructor(private readonly host: ReactiveControllerHost, private readonly makeWorker: () => Worker = defaultWorker) {
+    host.addController(this);
+  }
+
+  hostConnected(): void {
+    this.worker = this.makeWorker();
+    this.worker.onmessage = (e: MessageEvent<ComputeResponse>) => this.received(e.data);
+  }
+
+  hostDisconnected(): void {
+    this.worker?.terminate();
+    this.worker = undefined;
+  }
+
+  /** Schedules a recompute of `doc` (debounced); `immediate` skips the wait. */
+  request(doc: BudgetDocument, immediate = false): void {
+    this.queued = doc;
+    this.stale = this.view !== undefined;
+    this.status = 'pending';
+    clearTimeout(this.timer);
+    this.waiting = true;
+    this.timer = setTimeout(() => {
+      this.waiting = false;
+      this.flush();
+    }, immediate ? 0 : DEBOUNCE_MS);
+    this.host.requestUpdate();
+  }
+
+  private flush(): void {
+    if (this.inFlight !== undefined || !this.queued || !this.worker) return;
+    const request: ComputeRequest = { seq: ++this.seq, document: this.queued };
+    this.queued = undefined;
+    this.inFlight = request.seq;
+    this.worker.postMessage(request);
+  }
+
+  private received(r: ComputeResponse): void {
+    this.inFlight = undefined;
+    if (r.ok) {
+      this.view = r.view;
+      this.elapsedMs = r.elapsedMs;
+      this.error = undefined;
+    } else {
+      this.error = r.message;
+    }
+    const more = this.queued !== undefined;
+    this.stale = more;
+    this.status = more ? 'pending' : r.ok ? 'complete' : 'error';
+    // A newer document arrived while computing: send it now, unless its debounce is still running.
+    if (more && !this.waiting) this.flush();
+    this.host.requestUpdate();
+    if (r.ok) this.onView?.(r.view, r.seq);
+  }
+}
+
+function defaultWorker(): Worker {
+  return new Worker(new URL('./compute-worker.ts', import.meta.url), { type: 'module' });
+}

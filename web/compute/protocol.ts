@@ -1,0 +1,13 @@
+import type { BudgetDocument } from '../../src/document';
+import type { ViewResult } from '../../src/report/view-result';
+
+/** Page -> worker: compute this document; `seq` orders requests. */
+export interface ComputeRequest {
+  seq: number;
+  document: BudgetDocument;
+}
+
+/** Worker -> page: the view for request `seq`, or an unexpected failure. */
+export type ComputeResponse =
+  | { seq: number; ok: true; view: ViewResult; elapsedMs: number }
+  | { seq: number; ok: false; message: string };

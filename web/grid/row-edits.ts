@@ -1,0 +1,108 @@
+/**
+ * Changes to a sensor's rows and to the suite, applied to a draft inside
+ * `store.edit`: new rows with sensible defaults, a row's kind changed with
+ * the fields that no longer apply removed, renames that rewrite formulas,
+ * new and duplicated sensors.
+ */
+import type { BudgetDocument, SensorEntry, SourceRow } from '../../src/document';
+import type { SensorKind, SourceKind } from '../../src/inputs/budget-input';
+import { unitDimension } from '../../src/units';
+import { uniqueId } from './ids';
+import { renameRowReferences, renameSensorReferences } from './references';
+import { defaultUnit, kindTakes, rowDimensions } from './unit-choices';
+
+/** The correlation time a bias-instability row gets when nobody knows it: 100 s (FORMAT.md, common practice). */
+export const ASSUMED_CORRELATION_TIME_S = 100;
+
+/** Provenance text of a correlation time filled in by the tool. */
+export const ASSUMED_CORRELATION_NOTE = `assumed: correlation time ${ASSUMED_CORRELATION_TIME_S} s, the usual guess when the datasheet gives none; replace it with the Allan plot's value`;
+
+const ID_BASE: Record<SourceKind, string> = {
+  'white-noise': 'noise', 'bias-instability': 'bi', 'rate-random-walk': 'rrw', 'turn-on-bias': 'bias',
+  'scale-factor': 'sf', quantisation: 'lsb', multipath: 'multipath',
+};
+
+const SENSOR_DEFAULTS: Record<SensorKind, { id: string; rateHz: number }> = {
+  'yaw-gyro': { id: 'gyro', rateHz: 100 }, 'wheel-speed': { id: 'wheel', rateHz: 20 }, 'gnss-position': { id: 'gnss', rateHz: 1 },
+  compass: { id: 'compass', rateHz: 10 }, 'range-bearing': { id: 'ranger', rateHz: 5 },
+};
+
+/** Fills in what a row needs and nobody typed: a bias-instability correlation time, marked as assumed. */
+export function fillRequired(row: SourceRow): void {
+  if (row.kind === 'bias-instability' && row.correlationTime === undefined) {
+    row.correlationTime = { value: ASSUMED_CORRELATION_TIME_S, unit: 's' };
+    row.assumed = true;
+    row.provenance = row.provenance ? `${row.provenance}; ${ASSUMED_CORRELATION_NOTE}` : ASSUMED_CORRELATION_NOTE;
+  }
+}
+
+/** A new row of `kind` for a sensor of `sensorKind`, with an id not among `taken`. Throws nothing. */
+export function newRow(sensorKind: SensorKind, kind: SourceKind, taken: readonly string[]): SourceRow {
+  const row: SourceRow = {
+    id: uniqueId(ID_BASE[kind], taken), kind, value: 0, unit: defaultUnit(rowDimensions(sensorKind, kind)), provenance: '', assumed: false,
+  };
+  if (kind === 'multipath') row.multipathModel = 'states';
+  fillRequired(row);
+  return row;
+}
+
+/**
+ * Changes a row's kind: options and cells the new kind does not take are
+ * removed, a unit of a dimension it does not accept is replaced by its
+ * default (the number is kept), and required cells are filled in.
+ */
+export function changeRowKind(row: SourceRow, sensorKind: SensorKind, kind: SourceKind): void {
+  row.kind = kind;
+  for (const field of ['biasForm', 'densitySides', 'multipathModel', 'quantum'] as const) delete row[field];
+  if (!kindTakes(kind, 'correlationTime')) delete row.correlationTime;
+  if (!kindTakes(kind, 'rate')) delete row.rate;
+  const dims = rowDimensions(sensorKind, kind);
+  const dim = unitDimension(row.unit);
+  if (dim === undefined || !dims.includes(dim)) row.unit = defaultUnit(dims);
+  if (kind === 'multipath') row.multipathModel = 'states';
+  fillRequired(row);
+}
+
+/** Renames row `rowIndex` of sensor `sensorIndex` and every formula that refers to it. */
+export function renameRow(doc: BudgetDocument, sensorIndex: number, rowIndex: number, id: string): void {
+  const sensor = doc.sensors[sensorIndex];
+  renameRowReferences(doc, sensor.id, sensor.sources[rowIndex].id, id);
+  sensor.sources[rowIndex].id = id;
+}
+
+/** Renames sensor `index` and every formula that refers to its cells. */
+export function renameSensor(doc: BudgetDocument, index: number, id: string): void {
+  renameSensorReferences(doc, doc.sensors[index].id, id);
+  doc.sensors[index].id = id;
+}
+
+/** A new sensor of `kind` with its usual rate and no rows, its id not among `taken`. Throws nothing. */
+export function newSensor(kind: SensorKind, taken: readonly string[]): SensorEntry {
+  const d = SENSOR_DEFAULTS[kind];
+  return { id: uniqueId(d.id, taken), kind, rate: { value: d.rateHz, unit: 'Hz' }, sources: [] };
+}
+
+/**
+ * Inserts a copy of sensor `index` after it, under a new id; formulas in
+ * the copy that referred to the original's own rows refer to the copy's.
+ * Returns the copy's index.
+ */
+export function duplicateSensor(doc: BudgetDocument, index: number): number {
+  const original = doc.sensors[index];
+  const copy = structuredClone(original);
+  copy.id = uniqueId(`${original.id}_copy`, doc.sensors.map((s) => s.id));
+  doc.sensors.splice(index + 1, 0, copy);
+  // Only the copy's own cells are rewritten: the rest of this scratch document is a throwaway clone.
+  const scratch: BudgetDocument = { ...structuredClone({ ...doc, sensors: [] }), sensors: [copy] };
+  renameSensorReferences(scratch, original.id, copy.id);
+  return index + 1;
+}
+
+/** Moves item `from` of `list` by `delta` places; returns the new index (unchanged at an end). */
+export function moveItem<T>(list: T[], from: number, delta: number): number {
+  const to = from + delta;
+  if (to < 0 || to >= list.length) return from;
+  const [item] = list.splice(from, 1);
+  list.splice(to, 0, item);
+  return to;
+}

@@ -1,0 +1,81 @@
+/**
+ * The columns of the error-source grid and, per row, which of them exist:
+ * correlation time and rate only where the row's kind takes them, the unit
+ * beside a correlation time or rate only once there is one, and the one
+ * model option that applies to the row's kind on its sensor.
+ */
+import type { SensorKind } from '../../src/inputs/budget-input';
+import type { SourceRow } from '../../src/document';
+import { unitDimension } from '../../src/units';
+import { kindTakes } from './unit-choices';
+
+/** A grid column: its key, header text and header tooltip. */
+export interface SourceColumn {
+  key: 'id' | 'kind' | 'value' | 'unit' | 'tau' | 'tauUnit' | 'rate' | 'rateUnit' | 'option' | 'provenance' | 'assumed';
+  label: string;
+  title: string;
+}
+
+/** The grid's columns, left to right; a column's index is its position here. */
+export const SOURCE_COLUMNS: readonly SourceColumn[] = [
+  { key: 'id', label: 'Id', title: 'Row id; formulas call the magnitude sensorId.rowId' },
+  { key: 'kind', label: 'Kind', title: 'Which error-source model the row is' },
+  { key: 'value', label: 'Magnitude', title: 'A number or a formula starting with "="; its unit decides its form' },
+  { key: 'unit', label: 'Unit', title: 'Unit of the magnitude; changing it converts the value' },
+  { key: 'tau', label: 'Corr. time', title: 'Correlation time (bias instability, multipath as states)' },
+  { key: 'tauUnit', label: 'Unit', title: 'Unit of the correlation time' },
+  { key: 'rate', label: 'Rate', title: 'Output rate a per-sample sigma or LSB refers to; empty means the sensor rate' },
+  { key: 'rateUnit', label: 'Unit', title: 'Unit of the rate override' },
+  { key: 'option', label: 'Form', title: 'The model option of this kind of row' },
+  { key: 'provenance', label: 'Provenance', title: 'Where the number came from' },
+  { key: 'assumed', label: 'Assumed', title: 'Ticked when nobody measured the value or read it from a datasheet' },
+];
+
+/** Index of a column by key. Throws nothing. */
+export function columnIndex(key: SourceColumn['key']): number {
+  return SOURCE_COLUMNS.findIndex((c) => c.key === key);
+}
+
+/** The option fields a row can carry. */
+export type OptionField = 'biasForm' | 'densitySides' | 'multipathModel' | 'component' | 'quantum';
+
+/** The option that applies to a row: its field, the choices and the value meant when it is omitted. */
+export interface RowOption {
+  field: OptionField;
+  label: string;
+  choices: { value: string; label: string }[];
+  fallback: string;
+}
+
+const OPTIONS: Record<OptionField, Omit<RowOption, 'fallback'>> = {
+  biasForm: { field: 'biasForm', label: 'bias form', choices: [{ value: 'floor', label: 'Allan floor' }, { value: 'flicker-coefficient', label: 'flicker B' }] },
+  densitySides: { field: 'densitySides', label: 'density sides', choices: [{ value: 'two', label: 'two-sided' }, { value: 'one', label: 'one-sided' }] },
+  multipathModel: { field: 'multipathModel', label: 'multipath model', choices: [{ value: 'states', label: 'states' }, { value: 'folded', label: 'folded' }] },
+  component: { field: 'component', label: 'component', choices: [{ value: 'range', label: 'range' }, { value: 'bearing', label: 'bearing' }] },
+  quantum: { field: 'quantum', label: 'quantum', choices: [{ value: 'rate', label: 'rate LSB' }, { value: 'angle', label: 'angle LSB' }] },
+};
+
+/** The option of a row's kind on a sensor of `sensorKind`, or undefined when none applies. Throws nothing. */
+export function rowOption(sensorKind: SensorKind, row: SourceRow): RowOption | undefined {
+  const dim = unitDimension(row.unit);
+  if (sensorKind === 'range-bearing') return { ...OPTIONS.component, fallback: dim === 'angle' ? 'bearing' : 'range' };
+  if (row.kind === 'bias-instability') return { ...OPTIONS.biasForm, fallback: 'floor' };
+  if (row.kind === 'multipath') return { ...OPTIONS.multipathModel, fallback: 'states' };
+  if (row.kind === 'quantisation' && sensorKind === 'yaw-gyro') return { ...OPTIONS.quantum, fallback: dim === 'angle' ? 'angle' : 'rate' };
+  const density = dim === 'angle-random-walk' || dim === 'velocity-random-walk';
+  if (row.kind === 'white-noise' && (density || row.densitySides !== undefined)) return { ...OPTIONS.densitySides, fallback: 'two' };
+  return undefined;
+}
+
+/** Which columns a row has, by column index. Throws nothing. */
+export function presentColumns(sensorKind: SensorKind, row: SourceRow): boolean[] {
+  const has: Record<SourceColumn['key'], boolean> = {
+    id: true, kind: true, value: true, unit: true, provenance: true, assumed: true,
+    tau: kindTakes(row.kind, 'correlationTime') || row.correlationTime !== undefined,
+    tauUnit: row.correlationTime !== undefined,
+    rate: kindTakes(row.kind, 'rate') || row.rate !== undefined,
+    rateUnit: row.rate !== undefined,
+    option: rowOption(sensorKind, row) !== undefined,
+  };
+  return SOURCE_COLUMNS.map((c) => has[c.key]);
+}

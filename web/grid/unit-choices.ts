@@ -1,0 +1,73 @@
+/**
+ * Which units a unit picker offers: the dimensions a field accepts, from the
+ * source-kind registry, narrowed by the sensor kind where the sensor takes
+ * only some of them (a compass's turn-on bias is an angle, a gyro's an
+ * angular rate), then each dimension's picker list from src/units.
+ */
+import type { SensorKind, SourceKind } from '../../src/inputs/budget-input';
+import { SOURCE_KINDS } from '../../src/sources/registry';
+import { DIMENSIONS, DIMENSION_NAMES, unitDimension, type DimensionName } from '../../src/units';
+
+/**
+ * What each sensor kind accepts for a row's magnitude, where that is fewer
+ * dimensions than the source kind allows (read off src/sensors/*.ts: the
+ * dimensions each `place` resolves a row with).
+ */
+export const SENSOR_ROW_DIMENSIONS: Record<SensorKind, Partial<Record<SourceKind, DimensionName[]>>> = {
+  'yaw-gyro': {
+    'white-noise': ['angle-random-walk', 'angular-rate'],
+    'bias-instability': ['angular-rate'],
+    'turn-on-bias': ['angular-rate'],
+    quantisation: ['angular-rate', 'angle'],
+  },
+  'wheel-speed': { 'white-noise': ['velocity-random-walk', 'speed'], quantisation: ['speed'] },
+  'gnss-position': { 'white-noise': ['length'], multipath: ['length'] },
+  compass: { 'white-noise': ['angle'], 'turn-on-bias': ['angle'] },
+  'range-bearing': { 'white-noise': ['length', 'angle'], 'turn-on-bias': ['length', 'angle'] },
+};
+
+/**
+ * Dimensions a row's `field` accepts on a sensor of `sensorKind`: the
+ * registry's list, intersected with the sensor's narrowing for the
+ * magnitude. Empty when the kind has no such field. Throws nothing.
+ */
+export function rowDimensions(sensorKind: SensorKind, sourceKind: SourceKind, field: 'value' | 'correlationTime' | 'rate' = 'value'): DimensionName[] {
+  const spec = SOURCE_KINDS[sourceKind]?.parameters.find((p) => p.field === field);
+  if (!spec) return [];
+  const narrow = field === 'value' ? SENSOR_ROW_DIMENSIONS[sensorKind]?.[sourceKind] : undefined;
+  return narrow ? spec.dimensions.filter((d) => narrow.includes(d)) : [...spec.dimensions];
+}
+
+/** True when the row kind has the field (correlation time, rate override). Throws nothing. */
+export function kindTakes(sourceKind: SourceKind, field: 'correlationTime' | 'rate'): boolean {
+  return SOURCE_KINDS[sourceKind]?.parameters.some((p) => p.field === field) ?? false;
+}
+
+/** The unit a new value of the first accepted dimension gets ("deg/√h" for an angle random walk). Throws nothing. */
+export function defaultUnit(dimensions: readonly DimensionName[]): string {
+  return DIMENSIONS[dimensions[0] ?? 'ratio'].picker[0];
+}
+
+/** One group of a unit picker: a dimension's label and its units. */
+export interface UnitGroup {
+  label: string;
+  units: string[];
+}
+
+/**
+ * The picker's groups for `dimensions`; the current unit is kept (in a
+ * group of its own when no list has it) so an unusual unit never vanishes.
+ * Throws nothing.
+ */
+export function unitGroups(dimensions: readonly DimensionName[], current: string | undefined): UnitGroup[] {
+  const groups = dimensions.map((d) => ({ label: DIMENSIONS[d].label, units: [...DIMENSIONS[d].picker] }));
+  if (current !== undefined && current !== '' && !groups.some((g) => g.units.includes(current))) {
+    const dim = unitDimension(current);
+    const label = dim ? `as written (${DIMENSIONS[dim].label})` : 'as written (not a unit this field takes)';
+    groups.unshift({ label, units: [current] });
+  }
+  return groups;
+}
+
+/** Every unit of every picker list, for free-text unit fields' suggestions. */
+export const ALL_UNITS: readonly string[] = DIMENSION_NAMES.flatMap((d) => DIMENSIONS[d].picker);

@@ -1,0 +1,20 @@
+import { parseBudgetDocument, serializeBudgetDocument, type BudgetDocument } from '../../src/document';
+
+/**
+ * Reads a budget file the user picked or dropped.
+ * @throws the document module's BudgetFileError (a SigmaLedgerError) naming the file and field.
+ */
+export async function readBudgetFile(file: File): Promise<{ document: BudgetDocument; notes: string[] }> {
+  return parseBudgetDocument(await file.text(), file.name);
+}
+
+/** Offers the document for download as the same JSON the command line reads. */
+export function downloadBudget(doc: BudgetDocument, fileName: string): void {
+  const blob = new Blob([serializeBudgetDocument(doc)], { type: 'application/json' });
+  const url = URL.createObjectURL(blob);
+  const a = document.createElement('a');
+  a.href = url;
+  a.download = fileName.endsWith('.json') ? fileName : `${fileName}.json`;
+  a.click();
+  setTimeout(() => URL.revokeObjectURL(url), 1000);
+}
