@@ -27,17 +27,18 @@ export interface BudgetResult {
 /**
  * Datasheet rows to budgets: resolve the mission, assemble the error model,
  * sample the nominal path, run the covariance analysis with per-source
- * contributions, then read requirements and checkpoints off the series.
+ * contributions (unless `contributions: false`, which runs the total alone,
+ * several times faster), then read requirements and checkpoints off the series.
  * @throws InputError (a {@link SigmaLedgerError}) naming the bad field.
  */
-export function computeBudget(input: BudgetInput): BudgetResult {
+export function computeBudget(input: BudgetInput, options: { contributions?: boolean } = {}): BudgetResult {
   if (!input || typeof input !== 'object') throw new InputError('', 'the budget must be an object');
   const mission = resolveMission(input.mission);
   const stepS = resolveStep(input, mission.durationS);
   const model = buildErrorModel(input.sensors, mission, input.mission.initialSigmaNotes);
   const requirementSpecs = resolveRequirements(input.requirements, mission.durationS);
   const trajectory = buildNominalTrajectory(mission, stepS);
-  const history = runCovariance(model, trajectory);
+  const history = runCovariance(model, trajectory, { contributions: options.contributions });
   const series = buildBudgetSeries(model, trajectory, history);
   const requirements = requirementSpecs.map((r) => evaluateRequirement(r, series, model.streams));
   const checkpoints = checkpointBudgets(input.checkpoints, series, model.sources);

@@ -57,7 +57,7 @@ function fillStep(
   src: ErrorModel['sources'][number] | undefined, out: Record<VarianceQuantity, Float64Array>,
 ): void {
   const e = hist.entries, at = m * hist.steps + k;
-  const headingExtra = src ? src.headingOutputVarianceSI : model.sources.reduce((a, s) => a + s.headingOutputVarianceSI, 0);
+  const headingExtra = src ? src.headingOutputVarianceSI : totalOutputVariances(model).heading;
   out.heading[k] = e.headingHeading[at] + headingExtra;
   if (!model.hasSpeedInput) return;
   const aa = e.alongAlong[at], cc = e.crossCross[at], ac = e.alongCross[at];
@@ -68,8 +68,23 @@ function fillStep(
   out['cross-track'][k] = cc;
   out.drms[k] = aa + cc;
   const v = traj.speedMps[k];
-  const white = v > 0 ? (src ? src.speedOutputVarianceSI : model.sources.reduce((a, x) => a + x.speedOutputVarianceSI, 0)) : 0;
+  const white = v > 0 ? (src ? src.speedOutputVarianceSI : totalOutputVariances(model).speed) : 0;
   out.speed[k] = v * v * e.speedScale[at] + white;
+}
+
+const outputTotals = new WeakMap<ErrorModel, { heading: number; speed: number }>();
+
+/** The output-only variances (angle quantum, speed white noise) of all sources together, cached per model. */
+function totalOutputVariances(model: ErrorModel): { heading: number; speed: number } {
+  let t = outputTotals.get(model);
+  if (!t) {
+    t = {
+      heading: model.sources.reduce((a, s) => a + s.headingOutputVarianceSI, 0),
+      speed: model.sources.reduce((a, s) => a + s.speedOutputVarianceSI, 0),
+    };
+    outputTotals.set(model, t);
+  }
+  return t;
 }
 
 function horizontalRadii(traj: NominalTrajectory, hist: CovarianceHistory, hasPosition: boolean): { cepM: Float64Array; r95M: Float64Array } {

@@ -2,16 +2,18 @@ import type { ErrorModel } from './error-model';
 import { TIME_SLACK_S, type NominalTrajectory } from '../mission/nominal-trajectory';
 import { discretiseStep, type StepDiscretisation } from './discretise-step';
 import { stepPieces } from './step-pieces';
+import { RampDiscretiser } from './ramp-discretisation';
 
 /**
  * Φ and Q_d for every step of a run, computed once per constant-speed
  * segment for full steps (ENGINE.md §4: the error dynamics are time
- * invariant in the path frame there) and per piece where a step straddles a
- * segment boundary or lies on a speed ramp.
+ * invariant in the path frame there), interpolated in speed on ramps, and
+ * per piece where a step straddles a segment boundary.
  */
 export class DiscretisationCache {
   private readonly perSegment: (StepDiscretisation | undefined)[];
   private readonly byKey = new Map<string, StepDiscretisation>();
+  private readonly ramps = new Map<number, RampDiscretiser>();
   private segment = 0;
 
   constructor(private readonly model: ErrorModel, private readonly traj: NominalTrajectory) {
@@ -30,10 +32,17 @@ export class DiscretisationCache {
       this.perSegment[i] ??= discretiseStep(this.model, seg.speedStartMps, seg.turnRateRadps, stepS);
       return [this.perSegment[i]!];
     }
+    if (!constant && t1 <= seg.endS + TIME_SLACK_S && Math.abs(t1 - t0 - stepS) <= 1e-9 * stepS) {
+      let ramp = this.ramps.get(this.segment);
+      if (!ramp) this.ramps.set(this.segment, (ramp = new RampDiscretiser(this.model, seg, stepS)));
+      const mid = (t0 + t1) / 2;
+      return [ramp.at(seg.speedStartMps + ((seg.speedEndMps - seg.speedStartMps) * (mid - seg.startS)) / (seg.endS - seg.startS))];
+    }
     return stepPieces(this.traj, k).map((piece) => {
       const cached = piece.cacheKey ? this.byKey.get(piece.cacheKey) : undefined;
       if (cached) return cached;
-      const d = discretiseStep(this.model, piece.speedMps, piece.turnRateRadps, piece.lengthS);
+      // A ramp changes F every step: the power series is far cheaper than a Van Loan exponential per channel.
+      const d = discretiseStep(this.model, piece.speedMps, piece.turnRateRadps, piece.lengthS, piece.cacheKey ? 'van-loan' : 'series');
       if (piece.cacheKey) this.byKey.set(piece.cacheKey, d);
       return d;
     });

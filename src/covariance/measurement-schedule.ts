@@ -34,6 +34,7 @@ export function scheduleMeasurements(model: ErrorModel, traj: NominalTrajectory)
   const rByKey = noiseByKey(model);
   const n = model.states.length;
   const { along, cross } = model.core;
+  const h = new Float64Array(n);
   for (const stream of model.streams) {
     for (let j = 0; ; j++) {
       const tS = j / stream.rateHz;
@@ -44,7 +45,7 @@ export function scheduleMeasurements(model: ErrorModel, traj: NominalTrajectory)
       const c = Math.cos(psi), s = Math.sin(psi);
       const rows = stream.rowsAt({ northM: traj.northM[k], eastM: traj.eastM[k], headingRad: psi });
       for (const row of rows) {
-        const h = new Float64Array(n);
+        h.fill(0);
         // dN = c pA - s pC, dE = s pA + c pC (path frame to north/east).
         h[along] += row.hNorth * c + row.hEast * s;
         h[cross] += -row.hNorth * s + row.hEast * c;

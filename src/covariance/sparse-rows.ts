@@ -12,8 +12,11 @@ export interface SparseRows {
   val: Float64Array;
 }
 
-/** Compresses a dense row-major n x n matrix, keeping only entries where `mask` is true. */
-export function toSparseRows(dense: Float64Array, n: number, mask: Uint8Array): SparseRows {
+/**
+ * Compresses a dense row-major n x n matrix, keeping the non-zero entries
+ * where `mask` is true (every entry the mask allows when `keepZeros`).
+ */
+export function toSparseRows(dense: Float64Array, n: number, mask: Uint8Array, keepZeros = false): SparseRows {
   const rowStart = new Int32Array(n + 1);
   const cols: number[] = [];
   const vals: number[] = [];
@@ -21,7 +24,7 @@ export function toSparseRows(dense: Float64Array, n: number, mask: Uint8Array): 
     rowStart[i] = cols.length;
     for (let j = 0; j < n; j++) {
       const v = dense[i * n + j];
-      if (mask[i * n + j] && v !== 0) {
+      if (mask[i * n + j] && (keepZeros || v !== 0)) {
         cols.push(j);
         vals.push(v);
       }

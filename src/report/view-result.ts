@@ -43,16 +43,20 @@ export interface ViewResult {
   /** Why nothing could be computed (a start-pose cell failed, an engine input error), with the document path when known. */
   blocked?: { message: string; path?: string };
   result?: JsonResult;
+  /** True when the view was computed without per-source contributions (a quick first answer; shares follow). */
+  contributionsPending?: boolean;
   curves: RequirementCurve[];
   plan?: PlanView;
 }
 
 /**
+/**
  * Evaluates a document's cells and runs the budget, for the page's compute
  * worker (and tests under Node): never throws for bad input; a problem comes
- * back in `blocked` or `cellErrors`.
+ * back in `blocked` or `cellErrors`. With `contributions: false` only the
+ * totals are computed (several times faster): the page shows those first.
  */
-export function computeView(doc: BudgetDocument): ViewResult {
+export function computeView(doc: BudgetDocument, options: { contributions?: boolean } = {}): ViewResult {
   const sheet = evaluateBudgetDocument(doc);
   const base: ViewResult = {
     title: doc.title, caution: CAUTION, cellErrors: sheet.cellErrors, omitted: sheet.omitted,
@@ -60,7 +64,7 @@ export function computeView(doc: BudgetDocument): ViewResult {
   };
   if (!sheet.input) return { ...base, blocked: { message: sheet.blocked ?? 'nothing to compute' } };
   try {
-    const r = computeBudget(sheet.input);
+    const r = computeBudget(sheet.input, options);
     const every = Math.ceil(r.trajectory.tS.length / MAX_CHART_POINTS);
     const steps = keptSteps(r.trajectory.tS.length, every);
     const keep = (a: ArrayLike<number>) => steps.map((k) => a[k]);
@@ -77,7 +81,8 @@ export function computeView(doc: BudgetDocument): ViewResult {
       }))),
       outages: r.model.streams.flatMap((s) => s.outages.map((o) => ({ sensorId: s.sensorId, id: o.id, startS: o.startS, endS: o.endS }))),
     };
-    return { ...base, result: buildJsonResult(r, doc.title, every), curves, plan };
+    const pending = options.contributions === false;
+    return { ...base, result: buildJsonResult(r, doc.title, every), curves, plan, ...(pending && { contributionsPending: true }) };
   } catch (e) {
     if (!(e instanceof SigmaLedgerError)) throw e;
     const path = e.path ? documentPathOf(e.path, sheet.indexMap) : undefined;

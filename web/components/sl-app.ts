@@ -95,6 +95,7 @@ export class SlApp extends LitElement {
   private statusText(): string {
     const c = this.compute;
     if (!this.ready) return 'restoring…';
+    if (c.status === 'pending' && !c.stale && c.view?.contributionsPending) return 'totals up to date · shares updating…';
     if (c.status === 'pending') return c.view ? 'computing… (results shown are stale)' : 'computing…';
     if (c.status === 'error') return `engine error: ${c.error}`;
     if (c.view?.blocked) return 'cannot compute: see the workbench';

@@ -41,6 +41,7 @@ export class SlFindings extends LitElement {
     [role='tablist'] { display: flex; gap: 2px; }
     [role='tab'] { white-space: nowrap; font: inherit; border: 1px solid transparent; border-bottom: none; background: none; padding: 4px 10px; cursor: pointer; color: var(--sl-ink-soft); border-radius: var(--sl-radius) var(--sl-radius) 0 0; }
     [role='tab'][aria-selected='true'] { background: var(--sl-panel); border-color: var(--sl-rule); color: var(--sl-ink); font-weight: 600; margin-bottom: -1px; }
+    .pending { margin: 6px 0; font-size: 12px; color: var(--sl-warn-ink); }
     .stale-label { position: sticky; top: 31px; z-index: 2; font-size: 12px; font-weight: 600; background: var(--sl-warn-bg); color: var(--sl-warn-ink); padding: 3px 12px; border-bottom: 1px solid var(--sl-rule); }
     .results { padding: 10px 12px 24px; }
     :host([data-stale]) .results { opacity: 0.45; filter: grayscale(0.6); }
@@ -64,6 +65,12 @@ export class SlFindings extends LitElement {
   /** Tabs opened so far: kept on the page (hidden) so their pickers and charts survive switching. */
   @state() private opened = new Set<FindingsTab>(['time']);
   private groups?: { result: JsonResult; groups: CalibrationGroup[] };
+  /** The last view with per-source contributions, shown (marked) on the share tabs while a totals-only view is newer. */
+  private lastFull?: ViewResult;
+
+  override willUpdate(): void {
+    if (this.view?.result && !this.view.contributionsPending) this.lastFull = this.view;
+  }
 
   override render() {
     return html`
@@ -117,9 +124,15 @@ export class SlFindings extends LitElement {
           ${SIGMA_CHARTS.filter((k) => hasSigmaChart(view, k)).map((k) => html`<sl-sigma-chart kind=${k} .view=${view}></sl-sigma-chart>`)}
           <div><h3>Path from above</h3><sl-plan-view .plan=${view.plan}></sl-plan-view></div>`;
       case 'shares':
-        return html`<sl-share-chart .result=${result} .outages=${outages}></sl-share-chart>`;
-      case 'checkpoint':
-        return html`<sl-checkpoint-table .checkpoints=${checkpointsOf(result)}></sl-checkpoint-table>`;
+      case 'checkpoint': {
+        // Shares come a moment after the totals; until then the last ones stay up, marked.
+        const full = view.contributionsPending ? this.lastFull?.result : result;
+        if (!full) return html`<p class="empty">Working out each source's share…</p>`;
+        const pending = view.contributionsPending ? html`<p class="pending" role="status">Updating each source's share…</p>` : nothing;
+        return key === 'shares'
+          ? html`${pending}<sl-share-chart .result=${full} .outages=${outages}></sl-share-chart>`
+          : html`${pending}<sl-checkpoint-table .checkpoints=${checkpointsOf(full)}></sl-checkpoint-table>`;
+      }
       case 'calibration': {
         const groups = this.groupsOf(result);
         if (!groups.length) return html`<p class="empty">This budget estimates no calibration states.</p>`;

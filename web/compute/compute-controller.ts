@@ -6,8 +6,8 @@ import type { ComputeRequest, ComputeResponse } from './protocol';
 /** Where the latest recompute stands. */
 export type ComputeStatus = 'idle' | 'pending' | 'complete' | 'error';
 
-/** Quiet time after an edit before recomputing, ms: long enough to skip keystrokes, short enough to feel live. */
-export const DEBOUNCE_MS = 120;
+/** Quiet time after an edit before recomputing, ms: cells commit on Enter, so this only merges bursts (a paste, undo held down). */
+export const DEBOUNCE_MS = 40;
 
 /**
  * The one path from the page to the engine: debounces edits, keeps at most
@@ -69,6 +69,17 @@ export class ComputeController implements ReactiveController {
   }
 
   private received(r: ComputeResponse): void {
+    if (r.ok && !r.final) {
+      // The quick totals-only answer: show it now (unless a newer edit is waiting); the full one follows.
+      if (this.queued === undefined) {
+        this.view = r.view;
+        this.elapsedMs = r.elapsedMs;
+        this.stale = false;
+        this.host.requestUpdate();
+        this.onView?.(r.view, r.seq);
+      }
+      return;
+    }
     this.inFlight = undefined;
     if (r.ok) {
       this.view = r.view;

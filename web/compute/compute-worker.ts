@@ -1,17 +1,24 @@
 // The compute worker: evaluates the sheet and runs the budget off the page's
-// thread, so typing never waits for the engine. The controller keeps at most
-// one request in flight, so every request here is the newest it had.
+// thread, so typing never waits for the engine. Each request is answered
+// twice: first with the totals alone (several times faster, so the plots move
+// at once), then with every source's contribution. The controller keeps at
+// most one request in flight, so every request here is the newest it had.
 import { computeView } from '../../src/report/view-result';
 import type { ComputeRequest, ComputeResponse } from './protocol';
 
-self.onmessage = (event: MessageEvent<ComputeRequest>) => {
-  const { seq, document } = event.data;
+function answer(seq: number, run: () => ReturnType<typeof computeView>, final: boolean): void {
   const started = performance.now();
   let response: ComputeResponse;
   try {
-    response = { seq, ok: true, view: computeView(document), elapsedMs: performance.now() - started };
+    response = { seq, ok: true, view: run(), elapsedMs: performance.now() - started, final };
   } catch (e) {
     response = { seq, ok: false, message: e instanceof Error ? e.message : String(e) };
   }
-  (self as unknown as Worker).postMessage(response);
+  self.postMessage(response);
+}
+
+self.onmessage = (event: MessageEvent<ComputeRequest>) => {
+  const { seq, document } = event.data;
+  answer(seq, () => computeView(document, { contributions: false }), false);
+  answer(seq, () => computeView(document), true);
 };

@@ -7,7 +7,7 @@ export interface ComputeRequest {
   document: BudgetDocument;
 }
 
-/** Worker -> page: the view for request `seq`, or an unexpected failure. */
+/** Worker -> page: the view for request `seq` (first totals only, then `final` with contributions), or an unexpected failure. */
 export type ComputeResponse =
-  | { seq: number; ok: true; view: ViewResult; elapsedMs: number }
+  | { seq: number; ok: true; view: ViewResult; elapsedMs: number; final: boolean }
   | { seq: number; ok: false; message: string };
