@@ -1,6 +1,7 @@
 import { InputError } from './errors';
-import { positiveToSI } from './inputs/checks';
-import type { BudgetInput } from './inputs/budget-input';
+import { positiveToSI, requireOneOf } from './inputs/checks';
+import type { BudgetInput, ConfidenceLevel } from './inputs/budget-input';
+import { LEVELS } from './budget/levels';
 import { resolveMission, type ResolvedMission } from './mission/resolve-mission';
 import { buildNominalTrajectory, type NominalTrajectory } from './mission/nominal-trajectory';
 import { buildErrorModel } from './sensors/build-error-model';
@@ -22,6 +23,8 @@ export interface BudgetResult {
   series: BudgetSeries;
   requirements: RequirementResult[];
   checkpoints: CheckpointBudget[];
+  /** Level at which reports show budget-table values (settings.level; default 1sigma). */
+  reportLevel: ConfidenceLevel;
 }
 
 /**
@@ -42,7 +45,8 @@ export function computeBudget(input: BudgetInput, options: { contributions?: boo
   const series = buildBudgetSeries(model, trajectory, history);
   const requirements = requirementSpecs.map((r) => evaluateRequirement(r, series, model.streams));
   const checkpoints = checkpointBudgets(input.checkpoints, series, model.sources);
-  return { mission, model, trajectory, history, series, requirements, checkpoints };
+  const reportLevel = input.reportLevel === undefined ? '1sigma' : requireOneOf(input.reportLevel, LEVELS, 'reportLevel');
+  return { mission, model, trajectory, history, series, requirements, checkpoints, reportLevel };
 }
 
 function resolveStep(input: BudgetInput, durationS: number): number {

@@ -125,7 +125,7 @@ export interface BudgetDocument {
   formatVersion: typeof FORMAT_VERSION;
   title: string;
   description?: string;
-  settings: { step: QuantityCell };
+  settings: { step: QuantityCell; level?: ConfidenceLevel };
   values?: Record<string, NamedValue>;
   mission: MissionEntry;
   sensors: SensorEntry[];

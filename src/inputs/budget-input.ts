@@ -145,4 +145,6 @@ export interface BudgetInput {
   checkpoints?: CheckpointInput[];
   /** Time step of the covariance analysis and the output series. */
   step: Quantity;
+  /** Level at which reports show values in budget tables (default 1sigma); series stay 1 sigma. */
+  reportLevel?: ConfidenceLevel;
 }

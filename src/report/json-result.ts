@@ -1,6 +1,7 @@
 import type { BudgetResult } from '../pipeline';
 import type { VarianceQuantity } from '../budget/budget-series';
 import { CAUTION } from './caution';
+import { confidenceFactor1D } from '../budget/confidence';
 import { DISPLAY, varianceFactor } from './display-units';
 import { traceNoise, type NoiseTrace } from './noise-trace';
 
@@ -73,11 +74,16 @@ export function buildJsonResult(result: BudgetResult, title: string, every = 1):
       outages: r.outages.map((o) => ({ sensor: o.sensorId, outage: o.outageId, start_s: o.startS, end_s: o.endS, timeToExceed_s: o.timeToExceedS })),
     })),
     checkpoints: result.checkpoints.map((c) => ({
-      id: c.id, t_s: c.tS,
-      budgets: c.quantities.map((qb) => ({
-        quantity: CONTRIBUTION_KEYS[qb.quantity], unit: DISPLAY[qb.quantity].unit, sigma: Math.sqrt(varianceFactor(qb.quantity)) * qb.totalSigmaSI,
-        sources: qb.shares.map((s) => ({ id: s.sourceId, sigma: Math.sqrt(varianceFactor(qb.quantity)) * s.sigmaSI, share: s.fraction })),
-      })),
+      id: c.id, t_s: c.tS, level: result.reportLevel,
+      budgets: c.quantities.map((qb) => {
+        const toDisplay = Math.sqrt(varianceFactor(qb.quantity));
+        const atLevel = toDisplay * (qb.quantity === 'drms' ? 1 : confidenceFactor1D(result.reportLevel));
+        return {
+          quantity: CONTRIBUTION_KEYS[qb.quantity], unit: DISPLAY[qb.quantity].unit,
+          sigma: toDisplay * qb.totalSigmaSI, atLevel: atLevel * qb.totalSigmaSI,
+          sources: qb.shares.map((s) => ({ id: s.sourceId, sigma: toDisplay * s.sigmaSI, atLevel: atLevel * s.sigmaSI, share: s.fraction })),
+        };
+      }),
     })),
     noise: traceNoise(result.model),
     status: { healthy: result.history.issues.length === 0, issues: result.history.issues },

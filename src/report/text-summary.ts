@@ -2,6 +2,8 @@ import type { BudgetResult } from '../pipeline';
 import type { RequirementResult } from '../budget/requirements';
 import type { CheckpointBudget } from '../budget/checkpoints';
 import { formatSignificant } from '../units';
+import { confidenceFactor1D } from '../budget/confidence';
+import type { ConfidenceLevel } from '../inputs/budget-input';
 import { CAUTION } from './caution';
 import { DISPLAY, sigmaForDisplay } from './display-units';
 import { traceNoise, type TracedEntry } from './noise-trace';
@@ -31,7 +33,7 @@ export function formatSummary(result: BudgetResult, ctx: SummaryContext): string
     ...requirementLines(result.requirements),
     '',
     ...assumptionLines(result),
-    ...result.checkpoints.flatMap(checkpointLines),
+    ...result.checkpoints.flatMap((cp) => checkpointLines(cp, result.reportLevel)),
     ...calibrationLines(result),
     '',
     ...traceLines(result),
@@ -68,14 +70,18 @@ function assumptionLines(result: BudgetResult): string[] {
   ];
 }
 
-function checkpointLines(cp: CheckpointBudget): string[] {
-  const lines = [`BUDGET at ${cp.id} (t = ${time(cp.tS)}), 1σ, sources by share of variance:`];
+function checkpointLines(cp: CheckpointBudget, level: ConfidenceLevel): string[] {
+  const heading = level === '1sigma'
+    ? `BUDGET at ${cp.id} (t = ${time(cp.tS)}), 1σ, sources by share of variance:`
+    : `BUDGET at ${cp.id} (t = ${time(cp.tS)}), at ${level} (${fmt(confidenceFactor1D(level))} σ; DRMS at 1σ), sources by share of variance:`;
+  const lines = [heading];
   for (const qb of cp.quantities) {
     const unit = DISPLAY[qb.quantity].unit;
-    lines.push(`  ${DISPLAY[qb.quantity].label}: ${fmt(sigmaForDisplay(qb.quantity, qb.totalSigmaSI))} ${unit}`);
+    const f = qb.quantity === 'drms' ? 1 : confidenceFactor1D(level);
+    lines.push(`  ${DISPLAY[qb.quantity].label}: ${fmt(f * sigmaForDisplay(qb.quantity, qb.totalSigmaSI))} ${unit}`);
     for (const s of qb.shares) {
       if (s.fraction < 0.0005) continue;
-      lines.push(`      ${(100 * s.fraction).toFixed(1).padStart(5)} %  ${fmt(sigmaForDisplay(qb.quantity, s.sigmaSI)).padStart(9)} ${unit}  ${s.sourceId}`);
+      lines.push(`      ${(100 * s.fraction).toFixed(1).padStart(5)} %  ${fmt(f * sigmaForDisplay(qb.quantity, s.sigmaSI)).padStart(9)} ${unit}  ${s.sourceId}`);
     }
   }
   lines.push('');

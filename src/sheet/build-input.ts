@@ -82,6 +82,7 @@ export function buildBudgetInput(doc: BudgetDocument, lookup: CellLookup): Built
   if (typeof mission === 'string') return { blocked: mission, omitted, indexMap };
   if (step === undefined) return { blocked: 'the step (settings.step) has an error', omitted, indexMap };
   const input: BudgetInput = { mission, sensors, step };
+  if (doc.settings.level !== undefined) input.reportLevel = doc.settings.level;
   if (doc.requirements !== undefined) input.requirements = requirements;
   if (doc.checkpoints !== undefined) input.checkpoints = checkpoints;
   return { input, omitted, indexMap };

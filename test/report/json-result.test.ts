@@ -59,3 +59,23 @@ describe('the JSON result', () => {
     expect(formatSummary(result, { title: 'R1', fileName: 'r1.json' })).toContain(CAUTION);
   });
 });
+
+describe('the report level (settings.level)', () => {
+  it('scales one-dimensional budget-table values by the two-sided normal factor and leaves DRMS at 1 sigma', () => {
+    const b = scenarioR1();
+    b.reportLevel = '95%';
+    const json = buildJsonResult(computeBudget(b), 'R1');
+    const end = json.checkpoints.at(-1) as { level: string; budgets: { quantity: string; sigma: number; atLevel: number }[] };
+    expect(end.level).toBe('95%');
+    const heading = end.budgets.find((q) => q.quantity === 'heading')!;
+    expect(heading.atLevel / heading.sigma).toBeCloseTo(1.959963984540054, 12); // z(0.975), REFERENCES.md §6 (scipy.stats.chi2)
+    const drms = end.budgets.find((q) => q.quantity === 'drms')!;
+    expect(drms.atLevel).toBe(drms.sigma);
+  });
+
+  it('is refused when it is not one of the levels', () => {
+    const b = scenarioR1();
+    (b as { reportLevel: string }).reportLevel = '99%';
+    expect(() => computeBudget(b)).toThrow(/reportLevel.*must be one of/);
+  });
+});
