@@ -2,6 +2,8 @@ import { parseArgs } from 'node:util';
 import { SigmaLedgerError } from '../errors';
 import { CAUTION } from '../report/caution';
 import { checkCommand, EXIT, runCommand, sizeCommand, type Io } from './commands';
+import { ALLAN_CLI_OPTIONS, allanCommand, allanOptionsFromArgs } from './allan-command';
+import { CALIBRATE_CLI_OPTIONS, calibrateCommand, calibrateOptionsFromArgs } from './calibrate-command';
 
 const USAGE = `sigma-ledger: sensor error budgets by covariance analysis
 
@@ -14,6 +16,12 @@ usage:
       the largest value of one row's magnitude that still meets a requirement
   sigma-ledger check FILE
       validate the file and evaluate its cells without running the analysis
+  sigma-ledger allan LOG --column NAME --unit UNIT [--time-column NAME] [--time-unit U]
+                     [--rate HZ] [--kind gyro|accelerometer|speed] [--gap-tolerance REL] [--json]
+      overlapping Allan deviation of a static log (CSV or TSV) and its IEEE Std 952
+      noise terms, read off by slope and fitted over the whole curve
+  sigma-ledger calibrate LOG --measured NAME --truth NAME --unit UNIT [--json]
+      offset and scale factor of a sensor against known truth, by least squares
 
 exit codes: 0 every requirement holds, 1 some requirement fails, 2 bad input
 
@@ -28,6 +36,8 @@ const OPTIONS = {
   vary: { type: 'string' },
   tolerance: { type: 'string' },
   help: { type: 'boolean', default: false },
+  ...ALLAN_CLI_OPTIONS,
+  ...CALIBRATE_CLI_OPTIONS,
 } as const;
 
 /** Runs the command line; returns the exit code. Messages for bad input go to `io.err`, never as a stack trace. */
@@ -43,7 +53,7 @@ export async function main(argv: string[], io: Io = processIo()): Promise<number
       io.err(USAGE);
       return EXIT.badInput;
     }
-    if (!file) return usageError(io, `"${command}" needs a budget file`);
+    if (!file) return usageError(io, `"${command}" needs a file`);
     if (extra.length) return usageError(io, `unexpected argument "${extra[0]}"`);
     switch (command) {
       case 'run':
@@ -53,8 +63,12 @@ export async function main(argv: string[], io: Io = processIo()): Promise<number
         return sizeCommand(file, values.requirement, values.vary, relativeTolerance(values.tolerance), values.json, io);
       case 'check':
         return checkCommand(file, io);
+      case 'allan':
+        return await allanCommand(allanOptionsFromArgs(file, values), io);
+      case 'calibrate':
+        return await calibrateCommand(calibrateOptionsFromArgs(file, values), io);
       default:
-        return usageError(io, `unknown command "${command}"; use run, size or check`);
+        return usageError(io, `unknown command "${command}"; use run, size, check, allan or calibrate`);
     }
   } catch (e) {
     if (e instanceof SigmaLedgerError) {

@@ -136,7 +136,7 @@ describe('size', () => {
 describe('usage errors', () => {
   it.each([
     ['an unknown command', ['frobnicate', HARBOUR], 'unknown command "frobnicate"'],
-    ['a command without its budget file', ['run'], '"run" needs a budget file'],
+    ['a command without its budget file', ['run'], '"run" needs a file'],
     ['size without --requirement and --vary', ['size', TUG], 'size needs --requirement ID and --vary SENSOR.ROW'],
     ['an unknown option', ['run', HARBOUR, '--bogus'], '--bogus'],
     ['an extra argument', ['check', HARBOUR, 'another.json'], 'unexpected argument "another.json"'],

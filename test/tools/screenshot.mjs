@@ -19,6 +19,22 @@ try {
   const file = `.test-results/screenshot-${width}x${height}.png`;
   await page.screenshot({ path: file, fullPage: true });
   console.log(`saved ${file}`);
+  // With TABS=1, one more shot per tab pair: workbench tab i beside findings tab i.
+  if (process.env.TABS) {
+    for (let i = 1; i < 5; i++) {
+      await page.evaluate((index) => {
+        const app = document.querySelector('sl-app').shadowRoot;
+        for (const host of ['sl-workbench', 'sl-findings']) {
+          const tabs = app.querySelector(host)?.shadowRoot?.querySelectorAll('[role="tab"]') ?? [];
+          tabs[Math.min(index, tabs.length - 1)]?.click();
+        }
+      }, i);
+      await new Promise((r) => setTimeout(r, 400));
+      const tabFile = `.test-results/screenshot-${width}x${height}-tab${i}.png`;
+      await page.screenshot({ path: tabFile });
+      console.log(`saved ${tabFile}`);
+    }
+  }
 } finally {
   await browser.close();
   server.kill();

@@ -5,6 +5,8 @@ import type { ViewResult } from '../../src/report/view-result';
 import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
 import { blockedWithin } from '../grid/view-lookup';
+import { LEVELS } from '../../src/budget/levels';
+import type { ConfidenceLevel } from '../../src/inputs/budget-input';
 import './sl-checkpoint-list';
 import './sl-quantity';
 import './sl-requirement-table';
@@ -18,6 +20,7 @@ export class SlRequirementsEditor extends LitElement {
   static override styles = [editorStyles, css`
     :host { display: block; }
     .step { display: grid; grid-template-columns: auto 200px 1fr; gap: 8px; align-items: center; }
+    .step select { font: inherit; justify-self: start; }
   `];
 
   /** The open document's store; every edit goes through it. */
@@ -39,11 +42,26 @@ export class SlRequirementsEditor extends LitElement {
         <span>Time step</span>
         <sl-quantity .store=${this.store} .doc=${this.doc} .view=${this.view} path="settings.step" label="Analysis time step" .dimensions=${['time']}></sl-quantity>
         <span class="hint">of the covariance analysis and of every output series</span>
+        <span>Table level</span>
+        <select aria-label="Level of the budget tables" @change=${this.levelChanged}>
+          ${LEVELS.map((l) => html`<option .value=${l} ?selected=${l === (this.store.document.settings.level ?? '1sigma')}>${LEVEL_WORDS[l]}</option>`)}
+        </select>
+        <span class="hint">at which the command line's budget tables show each source (series and charts stay 1σ)</span>
       </div>
       ${stepProblem ? html`<div class="blocked" role="alert">${stepProblem}</div>` : nothing}
     `;
   }
+
+  private levelChanged(e: Event): void {
+    const level = (e.target as HTMLSelectElement).value as ConfidenceLevel;
+    this.store.edit(`set the table level to ${level}`, (d) => {
+      if (level === '1sigma') delete d.settings.level;
+      else d.settings.level = level;
+    });
+  }
 }
+
+const LEVEL_WORDS: Record<ConfidenceLevel, string> = { '1sigma': '1σ', '2sigma': '2σ', '95%': '95 %', '50%': '50 %' };
 
 declare global {
   interface HTMLElementTagNameMap {
