@@ -13,6 +13,7 @@
  */
 
 import { InputError } from '../errors';
+import { identity, multiply, oneNorm } from './dense-matrix';
 
 /** Padé coefficients b_0..b_m of r_m (Higham 2005, eq. 2.2 and §2; b_j = (2m−j)! m! / ((2m)! j! (m−j)!) up to a common factor). */
 const PADE_COEFFICIENTS: Readonly<Record<number, readonly number[]>> = {
@@ -135,18 +136,6 @@ function swapRows(m: Float64Array, n: number, i: number, j: number): void {
   }
 }
 
-function multiply(x: Float64Array, y: Float64Array, n: number): Float64Array {
-  const out = new Float64Array(n * n);
-  for (let i = 0; i < n; i++) {
-    for (let k = 0; k < n; k++) {
-      const xik = x[i * n + k];
-      if (xik === 0) continue;
-      for (let j = 0; j < n; j++) out[i * n + j] += xik * y[k * n + j];
-    }
-  }
-  return out;
-}
-
 function combine(n: number, ...terms: Array<[Float64Array, number]>): Float64Array {
   const out = new Float64Array(n * n);
   for (const [m, c] of terms) addScaled(out, m, c);
@@ -155,22 +144,6 @@ function combine(n: number, ...terms: Array<[Float64Array, number]>): Float64Arr
 
 function addScaled(target: Float64Array, m: Float64Array, c: number): void {
   for (let k = 0; k < target.length; k++) target[k] += c * m[k];
-}
-
-function identity(n: number): Float64Array {
-  const out = new Float64Array(n * n);
-  for (let i = 0; i < n; i++) out[i * n + i] = 1;
-  return out;
-}
-
-function oneNorm(a: Float64Array, n: number): number {
-  let best = 0;
-  for (let j = 0; j < n; j++) {
-    let sum = 0;
-    for (let i = 0; i < n; i++) sum += Math.abs(a[i * n + j]);
-    best = Math.max(best, sum);
-  }
-  return best;
 }
 
 function checkSquare(a: Float64Array, n: number): void {

@@ -16,31 +16,10 @@
  * Agrees with Van Loan to about 1e-13 relative (tested).
  */
 
+import { multiply, oneNorm } from './dense-matrix';
+
 /** Terms kept in both series. */
 const TERMS = 18;
-
-/** ‖A‖₁, the largest absolute column sum. */
-function oneNorm(a: Float64Array, n: number): number {
-  let best = 0;
-  for (let j = 0; j < n; j++) {
-    let sum = 0;
-    for (let i = 0; i < n; i++) sum += Math.abs(a[i * n + j]);
-    best = Math.max(best, sum);
-  }
-  return best;
-}
-
-function multiply(a: Float64Array, b: Float64Array, n: number): Float64Array {
-  const c = new Float64Array(n * n);
-  for (let i = 0; i < n; i++) {
-    for (let k = 0; k < n; k++) {
-      const aik = a[i * n + k];
-      if (aik === 0) continue;
-      for (let j = 0; j < n; j++) c[i * n + j] += aik * b[k * n + j];
-    }
-  }
-  return c;
-}
 
 /** A Q Aᵀ + Q, the doubling step of Q_d. */
 function doubleQd(phi: Float64Array, q: Float64Array, n: number): Float64Array {
