@@ -16,6 +16,7 @@ export function buildSite() {
 
 /** Starts `vite preview` on PORT; resolves with the child process once it answers. */
 export async function startPreview() {
+  if (await answers()) throw new Error(`something already serves ${URL}; stop it first (it would be measured instead of this build)`);
   const server = spawn('./node_modules/.bin/vite', ['preview', '--port', String(PORT), '--strictPort'], { stdio: 'ignore' });
   for (let i = 0; i < 100; i++) {
     try {
@@ -26,6 +27,14 @@ export async function startPreview() {
   }
   server.kill();
   throw new Error(`vite preview did not answer on ${URL}`);
+}
+
+async function answers() {
+  try {
+    return (await fetch(URL)).ok;
+  } catch {
+    return false;
+  }
 }
 
 /** Launches headless Chromium (CHROME_PATH or Debian's) with the flags this machine needs. */
