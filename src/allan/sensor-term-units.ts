@@ -7,7 +7,7 @@
  *
  * The third kind, a speed sensor (odometer, water-speed log), is outside
  * IEEE Std 952 and 1293; its white-noise term integrates to a distance
- * random walk and is named so. Its display unit m/s/√Hz matches the engine's
+ * random walk and is named so. Its display unit m/s/√Hz is the engine's
  * speed white-noise density (ENGINE.md §3).
  */
 import type { DimensionName } from '../units';

@@ -30,7 +30,7 @@ export const wheelSpeed: SensorKindSpec = {
         src.conversions.push(...r.conversions);
       } else {
         const r = row.kind === 'white-noise'
-          ? resolveWhiteNoise(row, { density: 'velocity-random-walk', perSample: 'speed' }, rateHz, path)
+          ? resolveWhiteNoise(row, { density: 'length-random-walk', perSample: 'speed' }, rateHz, path)
           : resolveQuantisation(row, 'speed', rateHz, path);
         src.noise.push({ channel: b.channel('speed noise', along), psdSI: r.psdSI, onlyWhileMoving: true, derivation: r.derivation });
         src.speedOutputVarianceSI += r.perSampleVarianceSI;

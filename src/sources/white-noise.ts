@@ -8,10 +8,10 @@ export const whiteNoiseSpec: SourceKindSpec = {
   kind: 'white-noise',
   label: 'white noise',
   summary:
-    'Angle or velocity random walk (deg/√h, m/s/√h), a noise density (deg/s/√Hz, µg/√Hz; two-sided unless marked ' +
-    'one-sided), or a per-sample sigma at the output rate (deg/s, m/s, m, deg).',
+    'Angle random walk (deg/√h) or a noise density (deg/s/√Hz for a gyro, m/s/√Hz for a speed sensor; two-sided ' +
+    'unless marked one-sided), or a per-sample sigma at the output rate (deg/s, m/s, m, deg).',
   parameters: [
-    { field: 'value', label: 'magnitude', dimensions: ['angle-random-walk', 'angular-rate', 'velocity-random-walk', 'speed', 'length', 'angle'], range: '>= 0', required: true },
+    { field: 'value', label: 'magnitude', dimensions: ['angle-random-walk', 'angular-rate', 'length-random-walk', 'speed', 'length', 'angle'], range: '>= 0', required: true },
     { field: 'rate', label: 'output rate (per-sample sigma only)', dimensions: ['frequency'], range: '> 0', required: false },
   ],
 };

@@ -67,7 +67,7 @@ export const DIMENSIONS: Readonly<Record<DimensionName, NamedDimension>> = {
     dimension: dimension(1, 0, -1.5),
   },
   'acceleration': { label: 'acceleration', si: 'm/s²', picker: ['mg', 'µg', 'm/s²', 'g'], dimension: dimension(1, 0, -2) },
-  'length-random-walk': { label: 'length random walk', si: 'm/√s', picker: ['m/√h', 'm/√s', 'cm/√s'], dimension: dimension(1, 0, -0.5) },
+  'length-random-walk': { label: 'speed noise density', si: 'm/√s', picker: ['m/s/√Hz', 'm/√h', 'm/√s', 'cm/s/√Hz'], dimension: dimension(1, 0, -0.5) },
   'ratio': { label: 'ratio', si: '1', picker: ['ppm', '%', '1', 'ppb'], dimension: dimension(0, 0, 0) },
   'time': { label: 'time', si: 's', picker: ['s', 'min', 'h', 'ms'], dimension: dimension(0, 0, 1) },
   'frequency': { label: 'frequency', si: 'Hz', picker: ['Hz', 'kHz'], dimension: dimension(0, 0, -1) },

@@ -65,6 +65,11 @@ describe('position error growth at speed', () => {
     expect(Math.abs(finalSigma(b, 'along-track') / Math.sqrt((0.05 ** 2 / 20) * 100) - 1)).toBeLessThan(REL);
   });
 
+  it('reads a speed noise density in m/s/√Hz as the two-sided √PSD: along-track σ = d √t (common practice, no source)', () => {
+    const b = budget(straightMission(100, 2), [gyro([]), wheel([{ id: 'white', kind: 'white-noise', value: q(0.01, 'm/s/√Hz') }], 20)], 0.5);
+    expect(Math.abs(finalSigma(b, 'along-track') / (0.01 * Math.sqrt(100)) - 1)).toBeLessThan(REL);
+  });
+
   it('adds no speed noise while parked (ENGINE.md §3: a parked wheel reads zero)', () => {
     const b = budget(straightMission(100, 0), [gyro([]), wheel([{ id: 'white', kind: 'white-noise', value: q(0.05, 'm/s') }])], 0.5);
     expect(finalSigma(b, 'along-track')).toBe(0);

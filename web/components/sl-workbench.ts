@@ -5,19 +5,21 @@ import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
 import { errorsWithin, isWithin } from '../grid/view-lookup';
 import type { SlSuiteEditor } from './sl-suite-editor';
+import './sl-log-import';
 import './sl-mission-editor';
 import './sl-requirements-editor';
 import './sl-suite-editor';
 import './sl-values-editor';
 
 /** The workbench's tabs. */
-export type WorkbenchTab = 'suite' | 'mission' | 'values' | 'requirements';
+export type WorkbenchTab = 'suite' | 'mission' | 'values' | 'requirements' | 'logs';
 
 const TABS: { key: WorkbenchTab; label: string; roots: string[] }[] = [
   { key: 'suite', label: 'Suite', roots: ['sensors'] },
   { key: 'mission', label: 'Mission', roots: ['mission'] },
   { key: 'values', label: 'Named values', roots: ['values'] },
   { key: 'requirements', label: 'Requirements', roots: ['requirements', 'checkpoints', 'settings'] },
+  { key: 'logs', label: 'Sensor logs', roots: [] },
 ];
 
 /** The tab that edits the item at a document path. */
@@ -27,7 +29,7 @@ function tabOf(path: string): WorkbenchTab {
 
 /**
  * The editing side of the page: tabs for the sensor suite, the mission, the
- * named values and the requirements. Every change goes through the store
+ * named values, the requirements and the sensor-log import. Every change goes through the store
  * (so undo covers it); the workbench re-renders when the store changes and
  * when a new view arrives. A problem that blocks the analysis is shown at
  * the top with a way to the item, and items left out of the analysis are
@@ -113,6 +115,7 @@ export class SlWorkbench extends LitElement {
       case 'mission': return html`<sl-mission-editor .store=${p.store} .doc=${p.doc} .view=${p.view}></sl-mission-editor>`;
       case 'values': return html`<sl-values-editor .store=${p.store} .doc=${p.doc} .view=${p.view}></sl-values-editor>`;
       case 'requirements': return html`<sl-requirements-editor .store=${p.store} .doc=${p.doc} .view=${p.view}></sl-requirements-editor>`;
+      case 'logs': return html`<sl-log-import .store=${p.store} .view=${p.view}></sl-log-import>`;
     }
   }
 

@@ -20,7 +20,7 @@ export const SENSOR_ROW_DIMENSIONS: Record<SensorKind, Partial<Record<SourceKind
     'turn-on-bias': ['angular-rate'],
     quantisation: ['angular-rate', 'angle'],
   },
-  'wheel-speed': { 'white-noise': ['velocity-random-walk', 'speed'], quantisation: ['speed'] },
+  'wheel-speed': { 'white-noise': ['length-random-walk', 'speed'], quantisation: ['speed'] },
   'gnss-position': { 'white-noise': ['length'], multipath: ['length'] },
   compass: { 'white-noise': ['angle'], 'turn-on-bias': ['angle'] },
   'range-bearing': { 'white-noise': ['length', 'angle'], 'turn-on-bias': ['length', 'angle'] },

@@ -1,0 +1,67 @@
+/**
+ * From a calibration to the rows a budget grid takes. The fitted offset and
+ * scale factor are estimates the navigation software subtracts; what is left
+ * for the budget is their uncertainty. So the turn-on-bias row's 1σ is the
+ * offset's standard deviation and the scale-factor row's 1σ is the scale
+ * factor's, and the estimates themselves go into the provenance.
+ */
+import type { CalibrationReport } from '../../src/calibration/calibration-report';
+import type { SensorKind } from '../../src/inputs/budget-input';
+import { formatSignificant } from '../../src/units';
+import type { RowPlan } from './grid-row-writer';
+import { rowRefusal } from './log-targets';
+import { calibratedFrom, cellNumber, type LogSource } from './provenance-text';
+
+/** One calibration row offered for writing, or why it cannot be written. */
+export interface CalibrationCandidate {
+  id: 'offset' | 'scale-factor';
+  label: string;
+  plan?: RowPlan;
+  refusal?: string;
+}
+
+const est = (x: number, sd: number, unit: string) => `${formatSignificant(x, 4)} ± ${formatSignificant(sd, 2)} ${unit}`;
+
+/** The whiteness verdict as a clause of the provenance. */
+export function whitenessClause(r: CalibrationReport): string {
+  const w = r.whiteness;
+  if (!w) return 'residual whiteness not checked (fewer than 10 samples)';
+  const p = formatSignificant(w.ljungBoxPValue, 2);
+  return w.white
+    ? `residuals consistent with white noise (Ljung-Box p = ${p})`
+    : `residuals CORRELATED (Ljung-Box p = ${p}), so these standard deviations are too small`;
+}
+
+/**
+ * "calibrated from FILE, DATE, N samples: offset b ± σb UNIT, scale factor s ± σs ppm; <whiteness>".
+ * Throws nothing.
+ */
+export function calibrationProvenance(r: CalibrationReport, source: LogSource): string {
+  return `${calibratedFrom(source)}: offset ${est(r.offset.value, r.offset.uncertainty, r.offset.unit)}, ` +
+    `scale factor ${est(r.scaleFactor.value, r.scaleFactor.uncertainty, 'ppm')}; ${whitenessClause(r)}`;
+}
+
+/**
+ * The turn-on-bias and scale-factor rows for a sensor of `sensorKind`.
+ * @returns two candidates, offset first. Throws nothing.
+ */
+export function calibrationCandidates(r: CalibrationReport, sensorKind: SensorKind, source: LogSource): CalibrationCandidate[] {
+  const provenance = calibrationProvenance(r, source);
+  const offset: RowPlan = {
+    kind: 'turn-on-bias', idStem: 'bias', label: 'turn-on bias (1σ left after calibration)',
+    fields: { value: cellNumber(r.offset.uncertainty), unit: r.offset.unit, provenance, assumed: false },
+  };
+  const scale: RowPlan = {
+    kind: 'scale-factor', idStem: 'sf', label: 'scale factor (1σ left after calibration)',
+    fields: { value: cellNumber(r.scaleFactor.uncertainty), unit: 'ppm', provenance, assumed: false },
+  };
+  return [
+    { id: 'offset', label: offset.label, ...candidate(sensorKind, offset) },
+    { id: 'scale-factor', label: scale.label, ...candidate(sensorKind, scale) },
+  ];
+}
+
+function candidate(sensorKind: SensorKind, plan: RowPlan): { plan?: RowPlan; refusal?: string } {
+  const refusal = rowRefusal(sensorKind, plan.kind, plan.fields.unit);
+  return refusal ? { refusal } : { plan };
+}

@@ -1,0 +1,48 @@
+/**
+ * Which sensors of the open document a log's results may be written into,
+ * and which rows such a sensor takes: the sensor kinds' own lists
+ * (src/sensors) and the units each row accepts there (web/grid/unit-choices).
+ */
+import type { AllanSensorKind } from '../../src/allan/sensor-term-units';
+import type { BudgetDocument } from '../../src/document';
+import type { SensorKind, SourceKind } from '../../src/inputs/budget-input';
+import { SENSOR_KINDS } from '../../src/sensors/registry';
+import { unitDimension, type DimensionName } from '../../src/units';
+import { rowDimensions } from '../grid/unit-choices';
+
+/** The budget's sensor kind that takes each log kind's noise terms; none takes an accelerometer's. */
+export const ALLAN_TARGET_KIND: Readonly<Record<AllanSensorKind, SensorKind | undefined>> = {
+  gyro: 'yaw-gyro',
+  accelerometer: undefined,
+  speed: 'wheel-speed',
+};
+
+/** The sensor kind a calibration log's unit points at: rates to a gyro, speeds to a wheel-speed sensor, angles to a compass. */
+export const CALIBRATION_TARGET_KIND: Readonly<Partial<Record<DimensionName, SensorKind>>> = {
+  'angular-rate': 'yaw-gyro',
+  'speed': 'wheel-speed',
+  'angle': 'compass',
+};
+
+/** A sensor of the document a result may go into. */
+export interface TargetSensor {
+  /** Index in `sensors`. */
+  index: number;
+  id: string;
+  kind: SensorKind;
+}
+
+/** The document's sensors of `kind`, in document order. Throws nothing. */
+export function sensorsOfKind(doc: BudgetDocument, kind: SensorKind | undefined): TargetSensor[] {
+  if (kind === undefined) return [];
+  return doc.sensors.flatMap((s, index) => (s.kind === kind ? [{ index, id: s.id, kind }] : []));
+}
+
+/** Why a sensor of `sensorKind` cannot take a `sourceKind` row in `unit`, or undefined when it can. Throws nothing. */
+export function rowRefusal(sensorKind: SensorKind, sourceKind: SourceKind, unit: string): string | undefined {
+  const spec = SENSOR_KINDS[sensorKind];
+  if (!spec.sourceKinds.includes(sourceKind)) return `a ${spec.label} has no ${sourceKind} row`;
+  const dim = unitDimension(unit);
+  if (dim === undefined || !rowDimensions(sensorKind, sourceKind).includes(dim)) return `a ${spec.label}'s ${sourceKind} row does not take ${unit}`;
+  return undefined;
+}
