@@ -16,6 +16,9 @@ import { ALLAN_SENSOR_KINDS, type AllanSensorKind } from '../allan/sensor-term-u
 import { formatAllanText } from '../allan/allan-text';
 import { unitFor } from '../units';
 import { EXIT, type Io } from './commands';
+import { allanCandidates, type TermMethod } from '../edits/allan-rows';
+import { ALLAN_TARGET_KIND } from '../edits/log-targets';
+import { intoTarget, logSource, openTarget, writePlans, type IntoTarget } from './write-into-budget';
 
 /** Largest log read, in bytes (1 GiB: about 40 million rows of a time and a value; about 1 GB of memory while reading). */
 export const MAX_LOG_BYTES = 1024 ** 3;
@@ -39,6 +42,10 @@ export interface AllanCommandOptions {
   /** Relative tolerance of a time step (default 0.5). */
   readonly gapTolerance?: number;
   readonly json: boolean;
+  /** Write the terms into this budget's sensor. */
+  readonly into?: IntoTarget;
+  /** Which reading supplies the sloped terms written with --into (default the slope read-offs). */
+  readonly terms?: TermMethod;
 }
 
 /** The options `allan` adds to the command line, in node:util parseArgs form (besides `--json`, which main.ts already has). */
@@ -68,6 +75,12 @@ function positive(values: ParsedValues, key: string): number | undefined {
   return v;
 }
 
+function termMethod(values: ParsedValues): TermMethod | undefined {
+  const t = text(values, 'terms');
+  if (t === undefined || t === 'slope' || t === 'fit') return t;
+  throw new InputError('--terms', `must be "slope" (the slope read-offs) or "fit" (the whole-curve fit), got "${t}"`);
+}
+
 /**
  * Turns parsed command-line values into {@link AllanCommandOptions}.
  * @throws InputError naming the option when one is missing or malformed.
@@ -83,7 +96,7 @@ export function allanOptionsFromArgs(file: string, values: ParsedValues): AllanC
   return {
     file, column, unit, timeColumn: text(values, 'time-column'), timeUnit: text(values, 'time-unit'),
     rateHz: positive(values, 'rate'), kind: kind as AllanSensorKind | undefined, gapTolerance: positive(values, 'gap-tolerance'),
-    json: values.json === true,
+    json: values.json === true, into: intoTarget(values), terms: termMethod(values),
   };
 }
 
@@ -124,6 +137,15 @@ export function allanJson(file: string, samples: number, rateHz: number, r: LogA
   };
 }
 
+/** Writes the terms that make rows (not held at zero, not mere bounds) into the target; returns what was written and skipped. */
+function writeTerms(options: AllanCommandOptions, target: IntoTarget, samples: number, rateHz: number, result: LogAllanResult): string[] {
+  const { doc, index } = openTarget(target, ALLAN_TARGET_KIND[result.kind]);
+  const candidates = allanCandidates({ result, rateHz }, options.terms ?? 'slope', doc.sensors[index].kind, logSource(options.file, samples));
+  const plans = candidates.flatMap((c) => (c.plan && !c.caution ? [c.plan] : []));
+  const skipped = candidates.filter((c) => !c.plan || c.caution).map((c) => `  skipped ${c.label}: ${c.refusal ?? c.caution}`);
+  return [...writePlans(target, doc, index, plans), ...skipped];
+}
+
 /**
  * Runs `allan`. Writes the table and terms (or JSON) to `io.out`, problems
  * to `io.err` as one message without a stack trace.
@@ -149,7 +171,9 @@ export async function allanCommand(options: AllanCommandOptions, io: Io): Promis
     const result = analyseLogColumn({ samples: table.values[0], unit: options.unit, rateHz, kind: options.kind, analysis: { sourceName: options.file } });
     const seconds = (performance.now() - started) / 1000;
     if (seconds > 2) io.err(`read ${table.rowCount} rows in ${((parsed - started) / 1000).toFixed(1)} s, computed in ${((performance.now() - parsed) / 1000).toFixed(1)} s\n`);
-    io.out(options.json ? JSON.stringify(allanJson(options.file, table.rowCount, rateHz, result)) + '\n' : formatAllanText(options.file, table.rowCount, rateHz, result));
+    const written = options.into ? writeTerms(options, options.into, table.rowCount, rateHz, result) : [];
+    io.out(options.json ? JSON.stringify({ ...allanJson(options.file, table.rowCount, rateHz, result), written }) + '\n' : formatAllanText(options.file, table.rowCount, rateHz, result));
+    for (const line of written) io.out(options.json ? '' : `${line}\n`);
     return EXIT.pass;
   } catch (e) {
     if (e instanceof SigmaLedgerError) {

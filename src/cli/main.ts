@@ -4,6 +4,7 @@ import { CAUTION } from '../report/caution';
 import { checkCommand, EXIT, runCommand, sizeCommand, type Io } from './commands';
 import { ALLAN_CLI_OPTIONS, allanCommand, allanOptionsFromArgs } from './allan-command';
 import { CALIBRATE_CLI_OPTIONS, calibrateCommand, calibrateOptionsFromArgs } from './calibrate-command';
+import { INTO_CLI_OPTIONS } from './write-into-budget';
 
 const USAGE = `sigma-ledger: sensor error budgets by covariance analysis
 
@@ -19,9 +20,13 @@ usage:
   sigma-ledger allan LOG --column NAME --unit UNIT [--time-column NAME] [--time-unit U]
                      [--rate HZ] [--kind gyro|accelerometer|speed] [--gap-tolerance REL] [--json]
       overlapping Allan deviation of a static log (CSV or TSV) and its IEEE Std 952
-      noise terms, read off by slope and fitted over the whole curve
+      noise terms, read off by slope and fitted over the whole curve; with
+      --into BUDGET --sensor ID [--terms slope|fit] the terms are written into
+      that sensor's rows with "fitted from LOG, DATE, N samples" as provenance
   sigma-ledger calibrate LOG --measured NAME --truth NAME --unit UNIT [--json]
-      offset and scale factor of a sensor against known truth, by least squares
+      offset and scale factor of a sensor against known truth, by least squares;
+      with --into BUDGET --sensor ID their uncertainties go into the sensor's
+      turn-on-bias and scale-factor rows
 
 exit codes: 0 every requirement holds, 1 some requirement fails, 2 bad input
 
@@ -38,6 +43,7 @@ const OPTIONS = {
   help: { type: 'boolean', default: false },
   ...ALLAN_CLI_OPTIONS,
   ...CALIBRATE_CLI_OPTIONS,
+  ...INTO_CLI_OPTIONS,
 } as const;
 
 /** Runs the command line; returns the exit code. Messages for bad input go to `io.err`, never as a stack trace. */

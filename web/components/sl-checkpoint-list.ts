@@ -4,7 +4,7 @@ import type { BudgetDocument, CheckpointEntry } from '../../src/document';
 import type { ViewResult } from '../../src/report/view-result';
 import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
-import { idProblem, uniqueId } from '../grid/ids';
+import { idProblem, uniqueId } from '../../src/edits/ids';
 import { blockedWithin } from '../grid/view-lookup';
 import type { CellCommitDetail } from './sl-cell';
 import './sl-cell';

@@ -5,8 +5,8 @@ import { getAtPath, joinSteps, splitPath } from '../../src/document/document-pat
 import type { ViewResult } from '../../src/report/view-result';
 import type { DimensionName } from '../../src/units';
 import type { DocumentStore } from '../state/document-store';
-import { changeUnit } from '../grid/change-unit';
-import { defaultUnit } from '../grid/unit-choices';
+import { changeUnit } from '../../src/edits/change-unit';
+import { defaultUnit } from '../../src/edits/unit-choices';
 import { cellErrorAt, cellValueAt } from '../grid/view-lookup';
 import type { CellCommitDetail } from './sl-cell';
 import type { UnitChangeDetail } from './sl-unit-picker';

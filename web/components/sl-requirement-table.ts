@@ -7,7 +7,7 @@ import type { ViewResult } from '../../src/report/view-result';
 import { DIMENSIONS, unitDimension } from '../../src/units';
 import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
-import { idProblem, uniqueId } from '../grid/ids';
+import { idProblem, uniqueId } from '../../src/edits/ids';
 import { blockedWithin, isOmitted } from '../grid/view-lookup';
 import type { CellCommitDetail } from './sl-cell';
 import './sl-cell';

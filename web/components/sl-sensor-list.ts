@@ -6,7 +6,7 @@ import type { ViewResult } from '../../src/report/view-result';
 import { SENSOR_KINDS, SENSOR_KIND_NAMES } from '../../src/sensors/registry';
 import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
-import { sensorIdProblem } from '../grid/ids';
+import { sensorIdProblem } from '../../src/edits/ids';
 import { duplicateSensor, newSensor, renameSensor } from '../grid/row-edits';
 import { blockedWithin, errorsWithin } from '../grid/view-lookup';
 import type { CellCommitDetail } from './sl-cell';

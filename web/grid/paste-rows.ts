@@ -9,10 +9,10 @@ import type { SensorKind, SourceKind } from '../../src/inputs/budget-input';
 import { SENSOR_KINDS } from '../../src/sensors/registry';
 import { SOURCE_KINDS } from '../../src/sources/registry';
 import { DIMENSIONS, unitDimension } from '../../src/units';
-import { cellText, readCellText } from './cell-text';
-import { idProblem, isTaken, uniqueId } from './ids';
+import { cellText, readCellText } from '../../src/edits/cell-text';
+import { idProblem, isTaken, uniqueId } from '../../src/edits/ids';
 import { changeRowKind, fillRequired, newRow } from './row-edits';
-import { rowDimensions } from './unit-choices';
+import { rowDimensions } from '../../src/edits/unit-choices';
 
 /** The pasted columns, in order, as the hint in the grid names them. */
 export const PASTE_COLUMNS = ['id', 'kind', 'value', 'unit', 'correlation time', 'correlation time unit', 'provenance'] as const;

@@ -7,9 +7,9 @@
 import type { BudgetDocument, SensorEntry, SourceRow } from '../../src/document';
 import type { SensorKind, SourceKind } from '../../src/inputs/budget-input';
 import { unitDimension } from '../../src/units';
-import { uniqueId } from './ids';
-import { renameRowReferences, renameSensorReferences } from './references';
-import { defaultUnit, kindTakes, rowDimensions } from './unit-choices';
+import { uniqueId } from '../../src/edits/ids';
+import { renameRowReferences, renameSensorReferences } from '../../src/edits/references';
+import { defaultUnit, kindTakes, rowDimensions } from '../../src/edits/unit-choices';
 
 /** The correlation time a bias-instability row gets when nobody knows it: 100 s (FORMAT.md, common practice). */
 export const ASSUMED_CORRELATION_TIME_S = 100;

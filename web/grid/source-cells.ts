@@ -11,7 +11,7 @@ import { SOURCE_KINDS } from '../../src/sources/registry';
 import type { CellCommitDetail } from '../components/sl-cell';
 import type { UnitChangeDetail } from '../components/sl-unit-picker';
 import { rowOption, SOURCE_COLUMNS, type SourceColumn } from './source-columns';
-import { rowDimensions } from './unit-choices';
+import { rowDimensions } from '../../src/edits/unit-choices';
 import { cellErrorAt, cellValueAt } from './view-lookup';
 
 /** A row's field that has a unit picker. */

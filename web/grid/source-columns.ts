@@ -7,7 +7,7 @@
 import type { SensorKind } from '../../src/inputs/budget-input';
 import type { SourceRow } from '../../src/document';
 import { unitDimension } from '../../src/units';
-import { kindTakes } from './unit-choices';
+import { kindTakes } from '../../src/edits/unit-choices';
 
 /** A grid column: its key, header text and header tooltip. */
 export interface SourceColumn {

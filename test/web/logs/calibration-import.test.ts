@@ -1,5 +1,5 @@
 import { expect } from '@open-wc/testing';
-import { isoDate } from '../../../web/logs/provenance-text';
+import { isoDate } from '../../../src/edits/provenance-text';
 import { chooseFile, deepQuery, logImport, normal, pick, runAndWait, settle } from './helpers';
 
 // A turntable run (invented): 7 set rates, 300 samples each, a gyro reading

@@ -2,8 +2,8 @@ import { expect } from '@open-wc/testing';
 import { analyseLogColumn } from '../../../src/allan/log-allan';
 import type { BudgetDocument } from '../../../src/document';
 import { EXAMPLES } from '../../../web/examples';
-import { allanCandidates } from '../../../web/logs/allan-grid-rows';
-import { writeRows } from '../../../web/logs/grid-row-writer';
+import { allanCandidates } from '../../../src/edits/allan-rows';
+import { writeRows } from '../../../src/edits/row-writer';
 import type { AllanOutcome } from '../../../web/logs/log-protocol';
 import { normal } from './helpers';
 

@@ -1,7 +1,7 @@
 import { expect } from '@open-wc/testing';
 import { parseBudgetDocument, serializeBudgetDocument } from '../../../src/document';
 import { computeView } from '../../../src/report/view-result';
-import { isoDate } from '../../../web/logs/provenance-text';
+import { isoDate } from '../../../src/edits/provenance-text';
 import { chooseFile, deepQuery, logImport, runAndWait, settle, whiteNoiseLog } from './helpers';
 
 /** The rows of the orchard example's gyro, by id. */

@@ -2,13 +2,13 @@ import { expect } from '@open-wc/testing';
 import type { SensorKind } from '../../../src/inputs/budget-input';
 import { SENSOR_KINDS } from '../../../src/sensors/registry';
 import { SOURCE_KINDS } from '../../../src/sources/registry';
-import { readCellText } from '../../../web/grid/cell-text';
-import { convertCell, convertFormula } from '../../../web/grid/change-unit';
+import { readCellText } from '../../../src/edits/cell-text';
+import { convertCell, convertFormula } from '../../../src/edits/change-unit';
 import { moveInGrid } from '../../../web/grid/grid-navigation';
-import { idProblem, sensorIdProblem, uniqueId, valueNameProblem } from '../../../web/grid/ids';
+import { idProblem, sensorIdProblem, uniqueId, valueNameProblem } from '../../../src/edits/ids';
 import { parsePastedRows, rowsAsText } from '../../../web/grid/paste-rows';
-import { collapseConversions, rewriteNames } from '../../../web/grid/references';
-import { rowDimensions, SENSOR_ROW_DIMENSIONS, unitGroups } from '../../../web/grid/unit-choices';
+import { collapseConversions, rewriteNames } from '../../../src/edits/references';
+import { rowDimensions, SENSOR_ROW_DIMENSIONS, unitGroups } from '../../../src/edits/unit-choices';
 
 describe('the grid helpers', () => {
   it('reading typed text gives numbers, formulas, empty cells, or a reason', () => {

@@ -5,10 +5,10 @@
  * offset's standard deviation and the scale-factor row's 1σ is the scale
  * factor's, and the estimates themselves go into the provenance.
  */
-import type { CalibrationReport } from '../../src/calibration/calibration-report';
-import type { SensorKind } from '../../src/inputs/budget-input';
-import { formatSignificant } from '../../src/units';
-import type { RowPlan } from './grid-row-writer';
+import type { CalibrationReport } from '../calibration/calibration-report';
+import type { SensorKind } from '../inputs/budget-input';
+import { formatSignificant } from '../units';
+import type { RowPlan } from './row-writer';
 import { rowRefusal } from './log-targets';
 import { calibratedFrom, cellNumber, type LogSource } from './provenance-text';
 

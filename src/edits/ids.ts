@@ -4,7 +4,7 @@
  * src/document/check-ids.ts (unique ignoring letter case, "mission"
  * reserved), checked before an edit so the user sees why a name is refused.
  */
-import { formulaNameProblem, nameKey, RESERVED_SENSOR_ID } from '../../src/document/names';
+import { formulaNameProblem, nameKey, RESERVED_SENSOR_ID } from '../document/names';
 
 /** An id: a letter, then letters, digits or '_' (at most 64 characters). */
 export const ID_PATTERN = /^[A-Za-z][A-Za-z0-9_]{0,63}$/;

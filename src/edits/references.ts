@@ -3,9 +3,9 @@
  * unit changes. Names ignore letter case (src/document/names.ts); text in
  * string literals and function names is never touched.
  */
-import type { BudgetDocument } from '../../src/document';
-import { nameKey } from '../../src/document/names';
-import { listCells } from '../../src/sheet/cell-list';
+import type { BudgetDocument } from '../document';
+import { nameKey } from '../document/names';
+import { listCells } from '../sheet/cell-list';
 import { isFormula } from './cell-text';
 
 // A name as the formula engine reads one (the same token as src/sheet/formula-names.ts); group 2 marks a function call.

@@ -3,7 +3,7 @@
  * carry: the file, the date of the fit (ISO yyyy-mm-dd, local calendar) and
  * the sample count come first, so every such row reads the same way.
  */
-import { formatSignificant } from '../../src/units';
+import { formatSignificant } from '../units';
 
 /** Longest file name kept in a provenance text (the document allows 1000 characters in all). */
 const MAX_NAME_CHARS = 120;

@@ -2,8 +2,8 @@
  * Between what the user types and what a cell holds: a number, a formula
  * text starting with "=", or nothing (an optional cell left empty).
  */
-import type { Cell } from '../../src/document';
-import { formatSignificant } from '../../src/units';
+import type { Cell } from '../document';
+import { formatSignificant } from '../units';
 
 /** Significant digits of evaluated numbers shown under formulas. */
 export const SHOWN_DIGITS = 6;

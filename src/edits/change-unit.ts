@@ -4,10 +4,10 @@
  * function, and formulas that refer to the cell by name are wrapped back so
  * they still see the number in the unit they were written for.
  */
-import type { BudgetDocument, Cell, QuantityCell } from '../../src/document';
-import { getAtPath } from '../../src/document/document-path';
-import { listCells } from '../../src/sheet/cell-list';
-import { convert, unitDimension } from '../../src/units';
+import type { BudgetDocument, Cell, QuantityCell } from '../document';
+import { getAtPath } from '../document/document-path';
+import { listCells } from '../sheet/cell-list';
+import { convert, unitDimension } from '../units';
 import { isFormula } from './cell-text';
 import { keepReferencesInUnit, quote } from './references';
 

@@ -1,14 +1,14 @@
 /**
  * Which sensors of the open document a log's results may be written into,
  * and which rows such a sensor takes: the sensor kinds' own lists
- * (src/sensors) and the units each row accepts there (web/grid/unit-choices).
+ * (src/sensors) and the units each row accepts there (unit-choices.ts).
  */
-import type { AllanSensorKind } from '../../src/allan/sensor-term-units';
-import type { BudgetDocument } from '../../src/document';
-import type { SensorKind, SourceKind } from '../../src/inputs/budget-input';
-import { SENSOR_KINDS } from '../../src/sensors/registry';
-import { unitDimension, type DimensionName } from '../../src/units';
-import { rowDimensions } from '../grid/unit-choices';
+import type { AllanSensorKind } from '../allan/sensor-term-units';
+import type { BudgetDocument } from '../document';
+import type { SensorKind, SourceKind } from '../inputs/budget-input';
+import { SENSOR_KINDS } from '../sensors/registry';
+import { unitDimension, type DimensionName } from '../units';
+import { rowDimensions } from './unit-choices';
 
 /** The budget's sensor kind that takes each log kind's noise terms; none takes an accelerometer's. */
 export const ALLAN_TARGET_KIND: Readonly<Record<AllanSensorKind, SensorKind | undefined>> = {

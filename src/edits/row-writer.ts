@@ -7,15 +7,15 @@
  * new row cannot serve are reported. Call it inside one `store.edit`, so the
  * whole write is one undoable step.
  */
-import type { BudgetDocument, QuantityCell, SensorEntry, SourceRow } from '../../src/document';
-import { nameKey, rowCellName } from '../../src/document/names';
-import type { SourceKind } from '../../src/inputs/budget-input';
-import { listCells } from '../../src/sheet/cell-list';
-import { formatSignificant } from '../../src/units';
-import { isFormula } from '../grid/cell-text';
-import { convertible } from '../grid/change-unit';
-import { uniqueId } from '../grid/ids';
-import { keepReferencesInUnit, rewriteNames } from '../grid/references';
+import type { BudgetDocument, QuantityCell, SensorEntry, SourceRow } from '../document';
+import { nameKey, rowCellName } from '../document/names';
+import type { SourceKind } from '../inputs/budget-input';
+import { listCells } from '../sheet/cell-list';
+import { formatSignificant } from '../units';
+import { isFormula } from './cell-text';
+import { convertible } from './change-unit';
+import { uniqueId } from './ids';
+import { keepReferencesInUnit, rewriteNames } from './references';
 
 /** One row to write. */
 export interface RowPlan {
@@ -77,7 +77,7 @@ function keepReferences(doc: BudgetDocument, name: string, before: QuantityCell 
 function overwrite(doc: BudgetDocument, sensorIndex: number, rowIndex: number, plan: RowPlan, warnings: string[]): SourceRow {
   const sensor = doc.sensors[sensorIndex];
   const old = sensor.sources[rowIndex];
-  const row: SourceRow = { id: old.id, kind: plan.kind, ...structuredClone(plan.fields) };
+  const row: SourceRow = { id: old.id, kind: plan.kind, ...copyOf(plan.fields) };
   for (const field of ['value', 'correlationTime', 'rate'] as const) {
     const before = field === 'value' ? old : old[field];
     const after = field === 'value' ? row : row[field];
@@ -103,7 +103,7 @@ export function writeRows(doc: BudgetDocument, sensorIndex: number, plans: reado
     const same = sameSourceRows(sensor, plan);
     if (same.length === 0) {
       const id = uniqueId(plan.idStem, sensor.sources.map((r) => r.id));
-      const row: SourceRow = { id, kind: plan.kind, ...structuredClone(plan.fields) };
+      const row: SourceRow = { id, kind: plan.kind, ...copyOf(plan.fields) };
       sensor.sources.push(row);
       return { fullId: `${sensor.id}.${id}`, label: plan.label, action: 'added', value: shown(row), warnings };
     }
@@ -114,4 +114,9 @@ export function writeRows(doc: BudgetDocument, sensorIndex: number, plans: reado
     const old = overwrite(doc, sensorIndex, same[0], plan, warnings);
     return { fullId: `${sensor.id}.${old.id}`, label: plan.label, action: 'overwritten', value: shown(plan.fields), previous: shown(old), warnings };
   });
+}
+
+/** A deep copy of plain JSON data (the engine has no structuredClone: it targets ES2022 without DOM or Node). */
+function copyOf<T>(value: T): T {
+  return JSON.parse(JSON.stringify(value)) as T;
 }

@@ -4,9 +4,9 @@
  * only some of them (a compass's turn-on bias is an angle, a gyro's an
  * angular rate), then each dimension's picker list from src/units.
  */
-import type { SensorKind, SourceKind } from '../../src/inputs/budget-input';
-import { SOURCE_KINDS } from '../../src/sources/registry';
-import { DIMENSIONS, DIMENSION_NAMES, unitDimension, type DimensionName } from '../../src/units';
+import type { SensorKind, SourceKind } from '../inputs/budget-input';
+import { SOURCE_KINDS } from '../sources/registry';
+import { DIMENSIONS, DIMENSION_NAMES, unitDimension, type DimensionName } from '../units';
 
 /**
  * What each sensor kind accepts for a row's magnitude, where that is fewer

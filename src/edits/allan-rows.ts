@@ -10,13 +10,20 @@
  * - quantisation: an angle quantum s = Q·√12 (quantum "angle").
  * Rate ramp has no row kind and is not written.
  */
-import type { NoiseTermRow } from '../../src/allan/allan-analysis';
-import { SENSOR_TERM_UNITS } from '../../src/allan/sensor-term-units';
-import type { SensorKind, SourceKind } from '../../src/inputs/budget-input';
-import type { RowPlan } from './grid-row-writer';
+import type { NoiseTermRow } from '../allan/allan-analysis';
+import { SENSOR_TERM_UNITS } from '../allan/sensor-term-units';
+import type { SensorKind, SourceKind } from '../inputs/budget-input';
+import type { RowPlan } from './row-writer';
 import { rowRefusal } from './log-targets';
-import type { AllanOutcome } from './log-protocol';
+import type { LogAllanResult } from '../allan/log-allan';
 import { cellNumber, fittedFrom, uncertaintyText, valueText, type LogSource } from './provenance-text';
+
+/** What the row builders need of a finished Allan analysis of a log. */
+export interface AllanOutcome {
+  result: LogAllanResult;
+  /** Sample rate of the log, Hz. */
+  rateHz: number;
+}
 
 /** The terms a grid row can take, in slope order. */
 export type WritableTermId = 'quantisation' | 'random-walk' | 'bias-instability' | 'rate-random-walk';
