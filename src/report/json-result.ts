@@ -16,6 +16,48 @@ const CONTRIBUTION_KEYS: Record<VarianceQuantity, string> = {
   heading: 'heading', speed: 'speed', north: 'north', east: 'east', drms: 'drms', 'along-track': 'along', 'cross-track': 'cross',
 };
 
+/** How long one requirement holds after an aiding sensor's outage begins (times in s from the mission start). */
+export interface OutageHoldEntry {
+  sensor: string;
+  outage: string;
+  start_s: number;
+  end_s: number;
+  /** Seconds from the outage's start until the requirement first breaks; null when it holds throughout. */
+  timeToExceed_s: number | null;
+}
+
+/** One requirement's verdict; limit, margin and worst are in `unit`. */
+export interface RequirementEntry {
+  id: string;
+  quantity: string;
+  level: string;
+  limit: number;
+  unit: string;
+  verdict: 'pass' | 'fail';
+  margin: number;
+  worst: number;
+  worst_t_s: number;
+  window_s: [number, number];
+  outages: OutageHoldEntry[];
+}
+
+/** One quantity's budget at a checkpoint: σ (and σ at the report level) in `unit`, sources sorted by share of variance (0 to 1). */
+export interface CheckpointBudgetEntry {
+  quantity: string;
+  unit: string;
+  sigma: number;
+  atLevel: number;
+  sources: { id: string; sigma: number; atLevel: number; share: number }[];
+}
+
+/** The budget at one checkpoint (t_s in s from the mission start). */
+export interface CheckpointEntry {
+  id: string;
+  t_s: number;
+  level: string;
+  budgets: CheckpointBudgetEntry[];
+}
+
 /** The machine-readable result of `sigma-ledger run --json` (documented in the README). */
 export interface JsonResult {
   format: 'sigma-ledger-result';
@@ -29,8 +71,8 @@ export interface JsonResult {
   series: Record<string, number[]>;
   contributions: Record<string, Record<string, number[]>>;
   calibration: { state: string; unit: string; sigma: number[] }[];
-  requirements: unknown[];
-  checkpoints: unknown[];
+  requirements: RequirementEntry[];
+  checkpoints: CheckpointEntry[];
   noise: NoiseTrace;
   status: { healthy: boolean; issues: BudgetResult['history']['issues'] };
 }

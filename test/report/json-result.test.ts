@@ -38,7 +38,8 @@ describe('the JSON result', () => {
   });
 
   it('reports each requirement with verdict, margin and each outage with start, end and time to exceed', () => {
-    const req = json.requirements[0] as Record<string, unknown>;
+    // Read through JSON, as a notebook or CI script would.
+    const req = JSON.parse(JSON.stringify(json.requirements[0])) as Record<string, unknown>;
     expect(req.id).toBe('cross');
     expect(['pass', 'fail']).toContain(req.verdict);
     expect(typeof req.margin).toBe('number');
@@ -65,7 +66,7 @@ describe('the report level (settings.level)', () => {
     const b = scenarioR1();
     b.reportLevel = '95%';
     const json = buildJsonResult(computeBudget(b), 'R1');
-    const end = json.checkpoints.at(-1) as { level: string; budgets: { quantity: string; sigma: number; atLevel: number }[] };
+    const end = json.checkpoints.at(-1)!;
     expect(end.level).toBe('95%');
     const heading = end.budgets.find((q) => q.quantity === 'heading')!;
     expect(heading.atLevel / heading.sigma).toBeCloseTo(1.959963984540054, 12); // z(0.975), REFERENCES.md §6 (scipy.stats.chi2)
