@@ -2,6 +2,7 @@ import type { BudgetDocument } from '../document/budget-document';
 import { evaluateBudgetDocument, documentPathOf } from '../sheet';
 import type { CellError } from '../sheet/cell-error';
 import type { OmittedItem } from '../sheet/cell-reader';
+import type { SheetEvaluation } from '../sheet/sheet-evaluation';
 import { computeBudget } from '../pipeline';
 import { SigmaLedgerError } from '../errors';
 import { levelSeries, limitDimension } from '../budget/levels';
@@ -57,7 +58,11 @@ export interface ViewResult {
  * totals are computed (several times faster): the page shows those first.
  */
 export function computeView(doc: BudgetDocument, options: { contributions?: boolean } = {}): ViewResult {
-  const sheet = evaluateBudgetDocument(doc);
+  return viewFromSheet(doc, evaluateBudgetDocument(doc), options);
+}
+
+/** The view of a document whose cells are already evaluated (see view-session.ts, which keeps the sheet between edits). */
+export function viewFromSheet(doc: BudgetDocument, sheet: SheetEvaluation, options: { contributions?: boolean } = {}): ViewResult {
   const base: ViewResult = {
     title: doc.title, caution: CAUTION, cellErrors: sheet.cellErrors, omitted: sheet.omitted,
     cellValues: Object.fromEntries(sheet.cellValues), curves: [],

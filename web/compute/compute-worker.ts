@@ -3,10 +3,14 @@
 // twice: first with the totals alone (several times faster, so the plots move
 // at once), then with every source's contribution. The controller keeps at
 // most one request in flight, so every request here is the newest it had.
-import { computeView } from '../../src/report/view-result';
+// One ViewSession keeps the document's workbook between edits.
+import { ViewSession } from '../../src/report/view-session';
+import type { ViewResult } from '../../src/report/view-result';
 import type { ComputeRequest, ComputeResponse } from './protocol';
 
-function answer(seq: number, run: () => ReturnType<typeof computeView>, final: boolean): void {
+const session = new ViewSession();
+
+function answer(seq: number, run: () => ViewResult, final: boolean): void {
   const started = performance.now();
   let response: ComputeResponse;
   try {
@@ -19,6 +23,6 @@ function answer(seq: number, run: () => ReturnType<typeof computeView>, final: b
 
 self.onmessage = (event: MessageEvent<ComputeRequest>) => {
   const { seq, document } = event.data;
-  answer(seq, () => computeView(document, { contributions: false }), false);
-  answer(seq, () => computeView(document), true);
+  answer(seq, () => session.view(document, { contributions: false }), false);
+  answer(seq, () => session.view(document), true);
 };
