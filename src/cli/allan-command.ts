@@ -15,7 +15,7 @@ import { SensorLogReader, type LogParseOptions, type SensorLogTable } from '../a
 import { ALLAN_SENSOR_KINDS, type AllanSensorKind } from '../allan/sensor-term-units';
 import { formatAllanText } from '../allan/allan-text';
 import { unitFor } from '../units';
-import { EXIT, type Io } from './commands';
+import { EXIT, exitOnInputError, type Io } from './commands';
 import { allanCandidates, type TermMethod } from '../edits/allan-rows';
 import { ALLAN_TARGET_KIND } from '../edits/log-targets';
 import { intoTarget, logSource, openTarget, writePlans, type IntoTarget } from './write-into-budget';
@@ -152,7 +152,7 @@ function writeTerms(options: AllanCommandOptions, target: IntoTarget, samples: n
  * @returns 0 when done, 2 for bad input (file, options or log contents).
  */
 export async function allanCommand(options: AllanCommandOptions, io: Io): Promise<number> {
-  try {
+  return exitOnInputError(io, async () => {
     if (options.rateHz !== undefined && options.timeColumn !== undefined) {
       throw new InputError('--rate', 'give either --time-column (the rate comes from the time stamps) or --rate, not both');
     }
@@ -175,11 +175,5 @@ export async function allanCommand(options: AllanCommandOptions, io: Io): Promis
     io.out(options.json ? JSON.stringify({ ...allanJson(options.file, table.rowCount, rateHz, result), written }) + '\n' : formatAllanText(options.file, table.rowCount, rateHz, result));
     for (const line of written) io.out(options.json ? '' : `${line}\n`);
     return EXIT.pass;
-  } catch (e) {
-    if (e instanceof SigmaLedgerError) {
-      io.err(`error: ${e.message}\n`);
-      return EXIT.badInput;
-    }
-    throw e;
-  }
+  });
 }

@@ -4,12 +4,12 @@
  * beside known truth, with standard deviations and a residual whiteness
  * check. The file is streamed as for `allan` (same size limit).
  */
-import { SigmaLedgerError, InputError } from '../errors';
+import { InputError } from '../errors';
 import { fitOffsetAndScaleFactor } from '../calibration/linear-calibration';
 import { checkResidualWhiteness } from '../calibration/residual-whiteness';
 import { calibrationReport, checkCalibrationUnit, formatCalibrationText } from '../calibration/calibration-report';
 import { readLogFile, type ParsedValues } from './allan-command';
-import { EXIT, type Io } from './commands';
+import { EXIT, exitOnInputError, type Io } from './commands';
 import { calibrationCandidates } from '../edits/calibration-rows';
 import { CALIBRATION_TARGET_KIND } from '../edits/log-targets';
 import { unitDimension } from '../units';
@@ -70,7 +70,7 @@ function writeCalibration(options: CalibrateCommandOptions, target: IntoTarget, 
  * @returns 0 when done, 2 for bad input (file, options or log contents).
  */
 export async function calibrateCommand(options: CalibrateCommandOptions, io: Io): Promise<number> {
-  try {
+  return exitOnInputError(io, async () => {
     checkCalibrationUnit(options.unit);
     const table = await readLogFile(options.file, {
       valueColumns: [options.measured, options.truth],
@@ -84,11 +84,5 @@ export async function calibrateCommand(options: CalibrateCommandOptions, io: Io)
     io.out(options.json ? JSON.stringify({ file: options.file, ...report, written }) + '\n' : formatCalibrationText(options.file, report));
     for (const line of written) io.out(options.json ? '' : `${line}\n`);
     return EXIT.pass;
-  } catch (e) {
-    if (e instanceof SigmaLedgerError) {
-      io.err(`error: ${e.message}\n`);
-      return EXIT.badInput;
-    }
-    throw e;
-  }
+  });
 }

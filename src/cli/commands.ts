@@ -4,7 +4,7 @@ import type { BudgetInput } from '../inputs/budget-input';
 import { quantityToSI } from '../inputs/checks';
 import { resolveMission } from '../mission/resolve-mission';
 import { sizeSource, type SizingResult } from '../budget/sizing';
-import { InputError } from '../errors';
+import { InputError, SigmaLedgerError } from '../errors';
 import { formatSummary } from '../report/text-summary';
 import { buildJsonResult } from '../report/json-result';
 import { formatSignificant } from '../units';
@@ -12,6 +12,22 @@ import { loadBudget, sheetProblems, withDocumentPaths, type LoadedBudget } from 
 
 /** Exit codes: every requirement holds, some requirement fails, bad input. */
 export const EXIT = { pass: 0, fail: 1, badInput: 2 } as const;
+
+/**
+ * Runs a command body, turning a {@link SigmaLedgerError} into one line on
+ * stderr and exit code 2 (for commands called directly, not through main).
+ */
+export async function exitOnInputError(io: Io, run: () => Promise<number>): Promise<number> {
+  try {
+    return await run();
+  } catch (e) {
+    if (e instanceof SigmaLedgerError) {
+      io.err(`error: ${e.message}\n`);
+      return EXIT.badInput;
+    }
+    throw e;
+  }
+}
 
 /** Output streams, injectable for tests. */
 export interface Io {

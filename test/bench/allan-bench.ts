@@ -12,22 +12,12 @@ import { allanDeviationCurve } from '../../src/allan/allan-curve';
 import { analyseAllanCurve } from '../../src/allan/allan-analysis';
 import { SensorLogReader } from '../../src/allan/parse-log';
 import { syntheticRateLog } from '../allan/synthetic-log';
+import { medianMs } from './median-time';
 
 const SAMPLES = 10_000_000;
 const RATE_HZ = 100;
 /** Chunk size the CLI streams files in (256 KiB). */
 const CHUNK_CHARS = 1 << 18;
-
-function median(run: () => void, repeats: number): number {
-  const times: number[] = [];
-  for (let i = 0; i < repeats; i++) {
-    const t = performance.now();
-    run();
-    times.push(performance.now() - t);
-  }
-  times.sort((a, b) => a - b);
-  return times[Math.floor(times.length / 2)];
-}
 
 /** The log as the CLI would read it: "time_s,rate_dps" rows in 256 KiB text chunks. */
 function csvChunks(rate: Float64Array): string[] {
@@ -54,7 +44,7 @@ const megabytes = chunks.reduce((s, c) => s + c.length, 0) / 1e6;
 console.log(`10 million samples at ${RATE_HZ} Hz: ${megabytes.toFixed(0)} MB of CSV in ${chunks.length} chunks`);
 
 let parsedRows = 0;
-const parseMs = median(() => {
+const parseMs = medianMs(() => {
   const reader = new SensorLogReader({ valueColumns: ['rate_dps'], timeColumn: 'time_s' });
   for (const c of chunks) reader.push(c);
   parsedRows = reader.finish().rowCount;
@@ -62,11 +52,11 @@ const parseMs = median(() => {
 console.log(`parse (papaparse + numbers + time check): median ${(parseMs / 1000).toFixed(2)} s for ${parsedRows} rows`);
 
 let points = 0;
-const curveMs = median(() => {
+const curveMs = medianMs(() => {
   points = allanDeviationCurve(rate, RATE_HZ).tauS.length;
 }, 5);
 console.log(`Allan curve (overlapping, ${points} cluster sizes): median ${(curveMs / 1000).toFixed(2)} s (target < 2 s)`);
 
 const curve = allanDeviationCurve(rate, RATE_HZ);
-const analysisMs = median(() => analyseAllanCurve(curve, 'gyro'), 5);
+const analysisMs = medianMs(() => analyseAllanCurve(curve, 'gyro'), 5);
 console.log(`term read-offs and whole-curve fit: median ${analysisMs.toFixed(1)} ms`);

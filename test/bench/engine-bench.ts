@@ -10,18 +10,7 @@
 import { computeBudget } from '../../src/pipeline';
 import type { BudgetInput } from '../../src/inputs/budget-input';
 import { scenarioR2 } from '../fixtures/reference-scenarios';
-
-function medianMs(run: () => void, repeats: number): number {
-  run(); // warm-up: JIT and compiled kernels
-  const times: number[] = [];
-  for (let i = 0; i < repeats; i++) {
-    const t = performance.now();
-    run();
-    times.push(performance.now() - t);
-  }
-  times.sort((a, b) => a - b);
-  return times[Math.floor(times.length / 2)];
-}
+import { medianMs } from './median-time';
 
 /** Least-squares slope of log(time) against log(size). */
 function growthExponent(points: [number, number][]): number {
@@ -49,12 +38,12 @@ function withExtraSources(extra: number): BudgetInput {
 }
 
 const r2 = scenarioR2();
-const base = medianMs(() => computeBudget(r2), 21);
+const base = medianMs(() => computeBudget(r2), 21, 1);
 console.log(`R2 full recompute (6,000 steps, 11 states, 14 sources, contributions): median ${base.toFixed(1)} ms (target < 100 ms)`);
 
 const lengthPoints: [number, number][] = [0.5, 1, 2, 4].map((f) => {
   const b = scaledMission(f);
-  const ms = medianMs(() => computeBudget(b), 7);
+  const ms = medianMs(() => computeBudget(b), 7, 1);
   console.log(`  mission x${f} (${(600 * f).toFixed(0)} s): median ${ms.toFixed(1)} ms`);
   return [f, ms];
 });
@@ -62,7 +51,7 @@ console.log(`growth with mission length: exponent ${growthExponent(lengthPoints)
 
 const sourcePoints: [number, number][] = [0, 6, 14, 30].map((extra) => {
   const b = withExtraSources(extra);
-  const ms = medianMs(() => computeBudget(b), 7);
+  const ms = medianMs(() => computeBudget(b), 7, 1);
   console.log(`  ${14 + extra} sources: median ${ms.toFixed(1)} ms`);
   return [14 + extra, ms];
 });

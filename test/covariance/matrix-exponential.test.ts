@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { expm as mathjsExpm, matrix } from 'mathjs';
 import { expm } from '../../src/covariance/matrix-exponential';
+import { oneNorm } from '../../src/covariance/dense-matrix';
 import { InputError } from '../../src/errors';
 import { seededRandom } from '../fixtures/seeded-random';
 
@@ -26,16 +27,6 @@ function frobenius(a: ArrayLike<number>): number {
 
 function relativeDifference(x: Float64Array, y: Float64Array): number {
   return frobenius(x.map((v, k) => v - y[k])) / frobenius(y);
-}
-
-function oneNorm(a: Float64Array, n: number): number {
-  let best = 0;
-  for (let j = 0; j < n; j++) {
-    let sum = 0;
-    for (let i = 0; i < n; i++) sum += Math.abs(a[i * n + j]);
-    best = Math.max(best, sum);
-  }
-  return best;
 }
 
 describe('expm', () => {
