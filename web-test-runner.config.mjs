@@ -3,6 +3,20 @@
 // why each setting is here.
 import { vitePlugin } from '@remcovaes/web-test-runner-vite-plugin';
 import { chromeLauncher } from '@web/test-runner-chrome';
+import { createServer } from 'node:net';
+
+/** A port the OS reports free now, so that two checkouts can run their browser tests at once. */
+async function freePort() {
+  return new Promise((resolve, reject) => {
+    const server = createServer();
+    server.once('error', reject);
+    server.listen(0, '127.0.0.1', () => {
+      const { port } = server.address();
+      server.close(() => resolve(port));
+    });
+  });
+}
+const vitePort = Number(process.env.WTR_VITE_PORT) || (await freePort());
 
 const executablePath = process.env.CHROME_PATH || '/usr/bin/chromium';
 
@@ -25,7 +39,7 @@ export default {
     vitePlugin({
       configFile: false,
       root: process.cwd(),
-      server: { port: 5174, strictPort: true, host: '127.0.0.1' },
+      server: { port: vitePort, strictPort: true, host: '127.0.0.1' },
       worker: { format: 'es' },
       optimizeDeps: {
         exclude: ['@web/test-runner-commands'],
