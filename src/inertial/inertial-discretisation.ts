@@ -2,7 +2,8 @@ import type { DiscretisationProvider } from '../covariance/run-covariance';
 import type { SparseEntries, StepDiscretisation } from '../covariance/discretise-step';
 import { expm } from '../covariance/matrix-exponential';
 import { reachability, toSparseRows, type SparseRows } from '../covariance/sparse-rows';
-import { genericKernel, propagationKernel, type PropagationKernel } from '../covariance/compiled-propagation';
+import type { PropagationKernel } from '../covariance/compiled-propagation';
+import { propagateInPlace } from '../covariance/covariance-kernels';
 import type { ResolvedSegment } from '../mission/resolve-mission';
 import type { InertialModel } from './inertial-model';
 import type { NominalRow } from './inertial-trajectory';
@@ -82,16 +83,14 @@ export function discretiseInertialStep(model: InertialModel, row: NominalRow, hS
 }
 
 /**
- * States above which the generated straight-line kernel is not used: its
- * code grows like n²·(non-zeros per row), and above about 24 states V8 stops
- * optimising it and it runs slower than the generic sparse loop (measured on
- * the drone reference scenario, 26 states: 10.7 s against 4.1 s on a loaded
- * machine; see the performance issue).
+ * The generic sparse propagation loop bound to this step's Φ. The generated
+ * straight-line kernels of ../covariance/compiled-propagation.ts are not
+ * used here: at 21 to 31 states their code is too large for V8 to optimise
+ * and they ran 4-5x slower than this loop on the benchmark case (see the
+ * performance issue). The run passes d.phi.val, which is phi.val.
  */
-const GENERATED_KERNEL_MAX_STATES = 24;
-
 function kernelFor(phi: SparseRows): PropagationKernel {
-  return phi.n <= GENERATED_KERNEL_MAX_STATES ? propagationKernel(phi) : genericKernel(phi);
+  return (x, offset, _val, scratch) => propagateInPlace(x, offset, phi, scratch);
 }
 
 function nonZeroEntries(dense: Float64Array): SparseEntries {

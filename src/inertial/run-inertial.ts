@@ -73,7 +73,10 @@ function readOutputs(model: InertialModel, rows: NominalRow[], run: CovarianceRu
   const n = model.states.length;
   const pairOf = new Int32Array(n * n).fill(-1);
   RECORDED_PAIRS.forEach(([i, j], p) => { pairOf[i * n + j] = p; pairOf[j * n + i] = p; });
-  const reader = (m: number, k: number): EntryReader => (i, j) => run.recorded[pairOf[i * n + j]][m * steps + k];
+  // One reader moved over (matrix, step), so reading the outputs allocates nothing per step.
+  let at = 0;
+  const read: EntryReader = (i, j) => run.recorded[pairOf[i * n + j]][at];
+  const reader = (m: number, k: number): EntryReader => { at = m * steps + k; return read; };
   const series: Record<string, InertialSeries> = {};
   for (const q of INERTIAL_QUANTITIES) {
     const sigma = new Float64Array(steps);
