@@ -20,7 +20,9 @@ export { buildNominalTrajectory, type NominalTrajectory } from './mission/nomina
 export type { ErrorModel, ModelSource, StateInfo } from './covariance/error-model';
 export { discretiseVanLoan } from './covariance/van-loan';
 export { expm } from './covariance/matrix-exponential';
-export { runCovariance, type CovarianceHistory } from './covariance/run-covariance';
+export {
+  runCovariance, runCovarianceProblem, type CovarianceHistory, type CovarianceProblem, type CovarianceRun, type DiscretisationProvider,
+} from './covariance/run-covariance';
 export type { CovarianceIssue } from './covariance/covariance-health';
 export { buildBudgetSeries, VARIANCE_QUANTITIES, type BudgetSeries, type VarianceQuantity } from './budget/budget-series';
 export { radiusForProbability, probabilityInsideCircle } from './budget/horizontal-accuracy';
@@ -30,3 +32,4 @@ export type { RequirementResult, OutageHold } from './budget/requirements';
 export type { CheckpointBudget, QuantityBudget, SourceShare } from './budget/checkpoints';
 export { sizeSource, type SizingResult } from './budget/sizing';
 export { computeBudget, MAX_STEPS, type BudgetResult } from './pipeline';
+export * from './inertial';
