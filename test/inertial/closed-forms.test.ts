@@ -90,3 +90,22 @@ describe('yaw from a level z-gyro equals the planar heading, Earth rotation off 
     expect(rel(yaw(imuRow('gyro', 'rate-random-walk', 10, 'deg/h/√h', { axis: 'z' })) * DEG, (kSI * 600 ** 1.5) / Math.sqrt(3))).toBeLessThan(1e-9);
   });
 });
+
+describe('random walks and scale factors on their axes (radius 1e15 m, Earth rotation off)', () => {
+  it('accelerometer bias random walk K gives a velocity sigma K t^1.5/√3 (Itô isometry, docs/checks.md §4: Var ∫W = t³/3)', () => {
+    const kSI = 10 * 9.80665e-6 / 60; // 10 µg/√h
+    const v = one(imuRow('accelerometer', 'rate-random-walk', 10, 'µg/√h', { axis: 'x' }), 600)('velocityNorth');
+    expect(rel(v, (kSI * 600 ** 1.5) / Math.sqrt(3))).toBeLessThan(1e-9);
+  });
+
+  it('a z-gyro scale factor of 1000 ppm over a full turn gives 0.36 deg of yaw (docs/checks.md §2)', () => {
+    const turn = [{ duration: { value: 36, unit: 's' }, speed: { value: 0, unit: 'm/s' }, turnRate: { value: 10, unit: 'deg/s' } }];
+    const b = inertialBudget(turn, [imuRow('gyro', 'scale-factor', 1000, 'ppm', { axis: 'z' })], 0.1);
+    expect(rel(sigmaAt(b, 'yaw', 36, FLAT_EARTH) / DEG, 0.36)).toBeLessThan(1e-9);
+  });
+
+  it('a z-accelerometer scale factor s on a level vehicle reads g too much or little: σ_vD = s g t (common practice, no source)', () => {
+    const v = one(imuRow('accelerometer', 'scale-factor', 1000, 'ppm', { axis: 'z' }), 60)('velocityDown');
+    expect(rel(v, 1e-3 * G * 60)).toBeLessThan(1e-9);
+  });
+});
