@@ -23,14 +23,14 @@ const cases: [value: number, unit: string, dimension: DimensionName, si: number]
 
 describe('IMU trade units', () => {
   it.each(cases)('%d %s is the published SI value', (value, unit, dim, si) => {
-    expect(Math.abs(toSI(value, unit, dim) - si)).toBeLessThanOrEqual(1e-15 * si);
+    expect(Math.abs(toSI(value, unit, dim, 'value') - si)).toBeLessThanOrEqual(1e-15 * si);
   });
 
   it('1 µg/√Hz is 5.88399e-4 m/s/√h (docs/checks.md §2)', () => {
-    expect(toSI(1, 'µg/√Hz', 'velocity-random-walk') / toSI(1, 'm/s/√h', 'velocity-random-walk')).toBeCloseTo(5.88399e-4, 9);
+    expect(toSI(1, 'µg/√Hz', 'velocity-random-walk', 'value') / toSI(1, 'm/s/√h', 'velocity-random-walk', 'value')).toBeCloseTo(5.88399e-4, 9);
   });
 
   it('0.01 °/s/√Hz is 0.6 °/√h (docs/checks.md §2)', () => {
-    expect(toSI(0.01, '°/s/√Hz', 'angle-random-walk') / toSI(1, 'deg/√h', 'angle-random-walk')).toBeCloseTo(0.6, 12);
+    expect(toSI(0.01, '°/s/√Hz', 'angle-random-walk', 'value') / toSI(1, 'deg/√h', 'angle-random-walk', 'value')).toBeCloseTo(0.6, 12);
   });
 });
