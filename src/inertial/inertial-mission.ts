@@ -26,9 +26,10 @@ export interface ResolvedInertialMission extends ResolvedMission {
  */
 export function resolveInertialMission(m: InertialMissionInput | undefined, path = 'mission'): ResolvedInertialMission {
   if (!m || typeof m !== 'object') throw new InputError(path, 'is missing');
+  if (!m.start || typeof m.start !== 'object') throw new InputError(`${path}.start`, 'is missing; expected north, east, heading, latitude and height');
   const sig = m.initialSigma ?? ({} as InertialMissionInput['initialSigma']);
   const planar = resolveMission({
-    start: { north: m.start?.north, east: m.start?.east, heading: m.start?.heading },
+    start: { north: m.start.north, east: m.start.east, heading: m.start.heading },
     initialSigma: { position: sig.horizontalPosition, heading: sig.heading },
     segments: m.segments,
   } as Parameters<typeof resolveMission>[0], path);
