@@ -28,6 +28,7 @@ export class ModelBuilder {
   readonly streams: MeasurementStream[] = [];
   readonly core: CoreStates;
   hasSpeedInput = false;
+  readonly deadReckoningRateHz = { gyro: 0, speed: 0 };
 
   constructor() {
     this.core = {
@@ -90,6 +91,7 @@ export class ModelBuilder {
       sources: this.sources.slice(),
       streams: this.streams.slice(),
       hasSpeedInput: this.hasSpeedInput,
+      deadReckoningRateHz: { ...this.deadReckoningRateHz },
       dynamics(speedMps: number, turnRateRadps: number): Float64Array {
         const f = new Float64Array(n * n);
         for (const t of terms) f[t.row * n + t.col] += t.constant + t.perSpeed * speedMps + t.perTurnRate * turnRateRadps;

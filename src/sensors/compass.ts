@@ -1,6 +1,6 @@
 import type { SensorInput } from '../inputs/budget-input';
 import { emptySource, type ModelBuilder } from '../covariance/model-builder';
-import type { ScalarMeasurement } from '../covariance/error-model';
+import type { MeasurementGeometry, ScalarMeasurement } from '../covariance/error-model';
 import { resolveRandomConstant } from '../sources/turn-on-bias';
 import { resolveWhiteNoise } from '../sources/white-noise';
 import { eachRow, resolveOutages, sensorRateHz, type SensorContext, type SensorKindSpec } from './sensor-kind';
@@ -30,7 +30,9 @@ export const compass: SensorKindSpec = {
       }
       b.sources.push(src);
     });
-    const rows: ScalarMeasurement[] = [{ key, noiseKey: key, hNorth: 0, hEast: 0, hStates }];
-    b.streams.push({ sensorId: sensor.id, rateHz, outages, rowsAt: () => rows });
+    const rowsAt = (g: MeasurementGeometry): ScalarMeasurement[] => [
+      { key, noiseKey: key, hNorth: 0, hEast: 0, hStates, ideal: g.headingRad, wraps: true },
+    ];
+    b.streams.push({ sensorId: sensor.id, rateHz, outages, rowsAt });
   },
 };

@@ -1,0 +1,178 @@
+import type { PlanarPlan } from './planar-plan';
+import { PathClock } from './path-clock';
+import type { RunRandom } from './run-random';
+import { ScalarProcess } from './scalar-process';
+
+/** Rounds to the nearest multiple of the LSB (mid-tread quantiser); q = 0 leaves x as it is. */
+function quantise(x: number, q: number): number {
+  return q > 0 ? q * Math.round(x / q) : x;
+}
+
+/**
+ * Truth and dead reckoning of one planar run between the filter's steps.
+ *
+ * Truth: the vehicle follows the nominal path exactly. Every calibration state
+ * is a {@link ScalarProcess} drawn exactly in discrete time; the gyro reports
+ * the mean true turn rate over each sample interval plus its errors (biases
+ * held over the interval, scale factor times the rate, white noise of the
+ * budget's PSD × rate per sample), rounded to its LSB; the speed sensor
+ * likewise reports the mean true speed (a parked wheel reads exactly zero).
+ *
+ * Dead reckoning (the filter's navigation solution) integrates those outputs
+ * nonlinearly, corrected with the filter's current calibration estimates:
+ * heading first (ψ̂ grows at the corrected rate), then position along the
+ * estimated heading: each speed sample moves the estimate by v̂ ∫[cos ψ̂, sin ψ̂] dt
+ * over its interval (the integral by the midpoint rule on sub-intervals that
+ * split at every gyro sample, exact to (ω̂ Δt)²/24). The sensors' samples are
+ * used over the interval they describe, one sample ahead of a real-time
+ * implementation.
+ */
+export class DeadReckoningRun {
+  readonly truth: ScalarProcess[];
+  /** Filter estimate of each state's calibration value (index = state), SI. */
+  readonly estimate: Float64Array;
+  northM = 0;
+  eastM = 0;
+  headingRad = 0;
+  /** Corrected and true speed of the last speed sample, m/s. */
+  speedMps = 0;
+  trueSpeedMps = 0;
+  /** Whether the last speed sample read non-zero. */
+  moving = false;
+  private timeS = 0;
+  private rateRadps = 0;
+  private gyroIndex = 0;
+  private wheelIndex = 1;
+  private cosSum = 0;
+  private sinSum = 0;
+  private readonly gyroClock: PathClock;
+  private readonly wheelClock: PathClock;
+  private readonly gyroStates: number[];
+  private readonly speedStates: number[];
+  private readonly at = { headingRad: 0, distanceM: 0 };
+  private readonly n: number;
+
+  constructor(private readonly plan: PlanarPlan) {
+    this.n = plan.n;
+    this.truth = Array.from({ length: plan.n }, () => new ScalarProcess(0, 0));
+    for (const c of plan.calibration) this.truth[c.state] = new ScalarProcess(c.decayPerS, c.psdSI);
+    this.estimate = new Float64Array(plan.n);
+    const { heading, along } = plan.model.core;
+    const coupled = (row: number) => plan.calibration.map((c) => c.state).filter((s) => this.coefficient(row, s, 1, 1) !== 0);
+    this.gyroStates = coupled(heading);
+    this.speedStates = coupled(along);
+    this.gyroClock = new PathClock(plan.mission);
+    this.wheelClock = new PathClock(plan.mission);
+  }
+
+  /** F[row][s] at speed v and turn rate w: the sensor error's coefficient on state s. */
+  private coefficient(row: number, s: number, v: number, w: number): number {
+    const e = row * this.n + s;
+    return this.plan.f0[e] + v * this.plan.fSpeed[e] + w * this.plan.fTurn[e];
+  }
+
+  /**
+   * The corrected input from a measured one. The sensor model is affine in
+   * the true input u (a rate or a speed): measured = u (1 + Σ a_s x_s) + Σ b_s x_s
+   * (scale factors a, biases b), so with the estimates x̂ the correction
+   * inverts it exactly: û = (measured - Σ b_s x̂_s) / (1 + Σ a_s x̂_s). A
+   * first-order correction (measured - Σ ... x̂ · measured) would make the
+   * filter converge to x / (1 + x) instead of the scale factor x.
+   * @param other the other input of F (speed for the gyro row), SI.
+   * @param speedRow 1 when u is the speed (F's per-speed terms scale u), 0 when it is the turn rate.
+   */
+  private invert(row: number, states: number[], measured: number, other: number, speedRow: 0 | 1): number {
+    let scale = 1, offset = 0;
+    for (const s of states) {
+      const e = row * this.n + s;
+      const perInput = speedRow ? this.plan.fSpeed[e] : this.plan.fTurn[e];
+      const constant = this.plan.f0[e] + other * (speedRow ? this.plan.fTurn[e] : this.plan.fSpeed[e]);
+      scale += perInput * this.estimate[s];
+      offset += constant * this.estimate[s];
+    }
+    return (measured - offset) / scale;
+  }
+
+  /** Draws the run's initial errors and calibration values and reads the first gyro sample. */
+  start(rng: RunRandom, initialErrors: { northM: number; eastM: number; headingRad: number }): void {
+    const m = this.plan.mission;
+    for (const c of this.plan.calibration) this.truth[c.state].start(c.initialSigmaSI, rng);
+    this.estimate.fill(0);
+    this.northM = m.startNorthM + initialErrors.northM;
+    this.eastM = m.startEastM + initialErrors.eastM;
+    this.headingRad = m.startHeadingRad + initialErrors.headingRad;
+    this.timeS = 0;
+    this.gyroIndex = 0;
+    this.wheelIndex = 1;
+    this.cosSum = this.sinSum = 0;
+    this.speedMps = this.trueSpeedMps = 0;
+    this.moving = false;
+    this.gyroClock.reset();
+    this.wheelClock.reset();
+    this.readGyro(rng);
+  }
+
+  /** Integrates up to t1S (after the current time); returns the dead-reckoned heading change, rad. */
+  advanceTo(t1S: number, rng: RunRandom): number {
+    const startHeading = this.headingRad;
+    const gyroRate = this.plan.gyro.rateHz;
+    const wheelRate = this.plan.speed?.rateHz ?? 0;
+    while (this.timeS < t1S - 1e-12) {
+      const nextGyroS = (this.gyroIndex + 1) / gyroRate;
+      const nextWheelS = wheelRate > 0 ? this.wheelIndex / wheelRate : Infinity;
+      let t = Math.min(nextGyroS, nextWheelS, t1S);
+      if (Math.abs(t - t1S) < 1e-9) t = t1S;
+      const d = t - this.timeS;
+      const mid = this.headingRad + 0.5 * this.rateRadps * d;
+      this.cosSum += Math.cos(mid) * d;
+      this.sinSum += Math.sin(mid) * d;
+      this.headingRad += this.rateRadps * d;
+      this.timeS = t;
+      if (nextWheelS <= t + 1e-9) this.readSpeed(rng);
+      if (nextGyroS <= t + 1e-9) {
+        this.gyroIndex++;
+        this.readGyro(rng);
+      }
+    }
+    return this.headingRad - startHeading;
+  }
+
+  /** The gyro sample over [j/f, (j+1)/f]: true mean rate plus errors, rounded, then corrected by the estimates. */
+  private readGyro(rng: RunRandom): void {
+    const { rateHz, whiteSigmaSI, quantumSI } = this.plan.gyro;
+    const t0 = this.gyroIndex / rateHz, t1 = (this.gyroIndex + 1) / rateHz;
+    this.gyroClock.at(t0, this.at);
+    const psi0 = this.at.headingRad;
+    this.gyroClock.at(t1, this.at);
+    const trueRate = (this.at.headingRad - psi0) * rateHz;
+    const { heading } = this.plan.model.core;
+    let error = 0;
+    for (const s of this.gyroStates) error += this.coefficient(heading, s, 0, trueRate) * this.truth[s].advanceTo(t0, rng);
+    const measured = quantise(trueRate + error + (whiteSigmaSI > 0 ? whiteSigmaSI * rng.normal() : 0), quantumSI);
+    this.rateRadps = this.invert(heading, this.gyroStates, measured, this.speedMps, 0);
+  }
+
+  /** The speed sample at i/f over the interval before it; moves the position estimate along the estimated heading. */
+  private readSpeed(rng: RunRandom): void {
+    const { rateHz, whiteSigmaSI, quantumSI } = this.plan.speed!;
+    const t1 = this.wheelIndex / rateHz;
+    this.wheelClock.at(t1 - 1 / rateHz, this.at);
+    const d0 = this.at.distanceM;
+    this.wheelClock.at(t1, this.at);
+    const trueSpeed = (this.at.distanceM - d0) * rateHz;
+    const { along } = this.plan.model.core;
+    let measured = 0;
+    if (trueSpeed > 0) {
+      let error = 0;
+      for (const s of this.speedStates) error += this.coefficient(along, s, trueSpeed, 0) * this.truth[s].advanceTo(t1, rng);
+      measured = quantise(trueSpeed + error + (whiteSigmaSI > 0 ? whiteSigmaSI * rng.normal() : 0), quantumSI);
+    }
+    this.speedMps = measured > 0 ? this.invert(along, this.speedStates, measured, 0, 1) : 0;
+    this.trueSpeedMps = trueSpeed;
+    this.moving = measured > 0;
+    this.northM += this.speedMps * this.cosSum;
+    this.eastM += this.speedMps * this.sinSum;
+    this.cosSum = this.sinSum = 0;
+    this.wheelIndex++;
+  }
+}
