@@ -21,6 +21,8 @@ export class PlanarFilter {
   private readonly n: number;
   private readonly fEntries: { i: number; j: number; c0: number; cv: number; cw: number }[];
   private readonly phiPattern: SparseRows;
+  /** States driven by white noise, with the rows of F that are non-zero in their column. */
+  private readonly noiseColumns: { state: number; rows: number[] }[] = [];
   private readonly kernel: PropagationKernel;
   private readonly a: Float64Array;
   private readonly a2: Float64Array;
@@ -41,6 +43,10 @@ export class PlanarFilter {
         this.fEntries.push({ i: Math.floor(e / n), j: e % n, c0: plan.f0[e], cv: plan.fSpeed[e], cw: plan.fTurn[e] });
         pattern[e] = 1;
       }
+    }
+    for (let st = 0; st < n; st++) {
+      if (plan.qcAlways[st] === 0 && plan.qcMoving[st] === 0) continue;
+      this.noiseColumns.push({ state: st, rows: this.fEntries.filter((f) => f.j === st).map((f) => f.i) });
     }
     this.phiPattern = toSparseRows(new Float64Array(n * n), n, reachability(pattern, n), true);
     this.kernel = propagationKernel(this.phiPattern);
@@ -66,7 +72,6 @@ export class PlanarFilter {
    */
   propagate(speedMps: number, turnRateRadps: number, dtS: number, moving: boolean): void {
     const { n, a, a2, phiDense } = this;
-    a.fill(0);
     for (const f of this.fEntries) a[f.i * n + f.j] = (f.c0 + f.cv * speedMps + f.cw * turnRateRadps) * dtS;
     // A² and A³ by A's few non-zeros; Φ = I + A + A²/2 + A³/6.
     a2.fill(0);
@@ -89,21 +94,17 @@ export class PlanarFilter {
   private addProcessNoise(dtS: number, moving: boolean): void {
     const { n, p, a } = this;
     const { qcAlways, qcMoving } = this.plan;
-    for (let s = 0; s < n; s++) {
-      const q = qcAlways[s] + (moving ? qcMoving[s] : 0);
+    for (const { state: s, rows } of this.noiseColumns) {
+      const q = (qcAlways[s] + (moving ? qcMoving[s] : 0)) * dtS;
       if (q === 0) continue;
       // Column s of A = F Δ carries F's coupling of the noise on state s.
-      p[s * n + s] += q * dtS;
-      for (let i = 0; i < n; i++) {
+      p[s * n + s] += q;
+      for (const i of rows) {
         const ai = a[i * n + s];
-        if (ai === 0) continue;
-        const half = 0.5 * q * dtS * ai;
+        const half = 0.5 * q * ai;
         p[i * n + s] += half;
         p[s * n + i] += half;
-        for (let j = 0; j < n; j++) {
-          const aj = a[j * n + s];
-          if (aj !== 0) p[i * n + j] += (q * dtS * ai * aj) / 3;
-        }
+        for (const j of rows) p[i * n + j] += (q * ai * a[j * n + s]) / 3;
       }
     }
   }

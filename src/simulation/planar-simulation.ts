@@ -58,6 +58,7 @@ export class PlanarSimulation implements MonteCarloModel {
     this.buffers = {
       errors: new Float64Array(this.quantities.length), variances: new Float64Array(this.quantities.length),
       nees: new Float64Array(3), neesDof: new Float64Array(3), scratch: new Float64Array(plan.n * (plan.n + 2)),
+      active: new Int32Array(plan.n),
     };
     this.hIdx = new Int32Array(plan.n);
     this.hVal = new Float64Array(plan.n);
@@ -79,7 +80,7 @@ export class PlanarSimulation implements MonteCarloModel {
         const turned = dr.advanceTo(traj.tS[k], rng);
         filter.propagate(dr.speedMps, turned / dtS, dtS, dr.moving);
         // The filter predicts its Gauss-Markov estimates as the model says: x̂ ← e^{-Δ/T} x̂.
-        for (const c of plan.calibration) if (c.decayPerS > 0) dr.estimate[c.state] *= Math.exp(-dtS * c.decayPerS);
+        for (const c of plan.calibration) if (c.decayPerS > 0) dr.estimate[c.state] *= this.decay(c.decayPerS, dtS);
       }
       for (const c of plan.calibration) dr.truth[c.state].advanceTo(traj.tS[k], rng);
       this.trueGeometry.northM = traj.northM[k];
@@ -91,6 +92,16 @@ export class PlanarSimulation implements MonteCarloModel {
       recordPlanarStep(plan, dr, filter, traj, k, this.buffers);
       sink.step(k, this.buffers.errors, this.buffers.variances, this.buffers.nees, this.buffers.neesDof);
     }
+  }
+
+  private readonly decays = new Map<number, number>();
+
+  /** e^{-Δ/T}, cached per 1/T for the mission's (fixed) step. */
+  private decay(decayPerS: number, dtS: number): number {
+    if (Math.abs(dtS - this.plan.trajectory.stepS) > 1e-12 * dtS) return Math.exp(-dtS * decayPerS);
+    let phi = this.decays.get(decayPerS);
+    if (phi === undefined) this.decays.set(decayPerS, (phi = Math.exp(-dtS * decayPerS)));
+    return phi;
   }
 
   /** One scalar measurement: truth from the true pose, prediction and H from the estimate, Joseph update, feedback. */

@@ -12,6 +12,8 @@ export interface StepBuffers {
   neesDof: Float64Array;
   /** n (n + 2) doubles of workspace. */
   scratch: Float64Array;
+  /** n indices of workspace. */
+  active: Int32Array;
 }
 
 /** States whose variance is below this (SI²) are left out of the NEES: they are exactly known (zero P0, no noise yet). */
@@ -76,12 +78,12 @@ function fullStateNees(
   const { n, model } = plan;
   const { along, cross, heading } = model.core;
   const p = filter.p;
-  const idx: number[] = [];
+  const idx = out.active;
+  let m = 0;
   for (let i = 0; i < n; i++) {
     if ((i === along || i === cross) && !model.hasSpeedInput) continue;
-    if (p[i * n + i] > KNOWN_STATE_VARIANCE) idx.push(i);
+    if (p[i * n + i] > KNOWN_STATE_VARIANCE) idx[m++] = i;
   }
-  const m = idx.length;
   const l = out.scratch, x = out.scratch.subarray(n * n);
   for (let a = 0; a < m; a++) {
     const i = idx[a];

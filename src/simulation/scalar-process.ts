@@ -37,7 +37,8 @@ export class ScalarProcess {
     if (!(dtS > 0)) return this.value;
     this.timeS = tS;
     if (this.psdSI === 0 && this.decayPerS === 0) return this.value;
-    if (dtS !== this.lastIntervalS) this.discretise(dtS);
+    // Sample intervals j/f - (j-1)/f differ in the last bits; reuse φ and √Q_d within 1e-12 relative.
+    if (Math.abs(dtS - this.lastIntervalS) > 1e-12 * dtS) this.discretise(dtS);
     this.value = this.phi * this.value + (this.sdDrive > 0 ? this.sdDrive * rng.normal() : 0);
     return this.value;
   }
