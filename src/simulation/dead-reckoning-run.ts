@@ -112,6 +112,23 @@ export class DeadReckoningRun {
     this.gyroClock.reset();
     this.wheelClock.reset();
     this.readGyro(rng);
+    if (this.plan.speed) this.readStartSpeed(rng);
+  }
+
+  /** The speed output at t = 0 (the instantaneous start speed with its errors); it moves nothing. */
+  private readStartSpeed(rng: RunRandom): void {
+    const { whiteSigmaSI, quantumSI } = this.plan.speed!;
+    const trueSpeed = this.plan.mission.segments[0].speedStartMps;
+    const { along } = this.plan.model.core;
+    let measured = 0;
+    if (trueSpeed > 0) {
+      let error = 0;
+      for (const s of this.speedStates) error += this.coefficient(along, s, trueSpeed, 0) * this.truth[s].value;
+      measured = quantise(trueSpeed + error + (whiteSigmaSI > 0 ? whiteSigmaSI * rng.normal() : 0), quantumSI);
+    }
+    this.speedMps = measured > 0 ? this.invert(along, this.speedStates, measured, 0, 1) : 0;
+    this.trueSpeedMps = trueSpeed;
+    this.moving = measured > 0;
   }
 
   /** Integrates up to t1S (after the current time); returns the dead-reckoned heading change, rad. */

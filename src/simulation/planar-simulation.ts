@@ -100,7 +100,7 @@ export class PlanarSimulation implements MonteCarloModel {
   private decay(decayPerS: number, dtS: number): number {
     if (Math.abs(dtS - this.plan.trajectory.stepS) > 1e-12 * dtS) return Math.exp(-dtS * decayPerS);
     let phi = this.decays.get(decayPerS);
-    if (phi === undefined) this.decays.set(decayPerS, (phi = Math.exp(-dtS * decayPerS)));
+    if (phi === undefined) this.decays.set(decayPerS, (phi = Math.exp(-this.plan.trajectory.stepS * decayPerS)));
     return phi;
   }
 

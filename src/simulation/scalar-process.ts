@@ -29,6 +29,8 @@ export class ScalarProcess {
   start(initialSigma: number, rng: RunRandom): void {
     this.value = initialSigma > 0 ? initialSigma * rng.normal() : 0;
     this.timeS = 0;
+    // Forget the last interval: a run must not depend on the runs before it (bit-for-bit replays).
+    this.lastIntervalS = -1;
   }
 
   /** Advances to `tS` (not before the current time); a constant draws nothing. */
@@ -39,6 +41,7 @@ export class ScalarProcess {
     if (this.psdSI === 0 && this.decayPerS === 0) return this.value;
     // Sample intervals j/f - (j-1)/f differ in the last bits; reuse φ and √Q_d within 1e-12 relative.
     if (Math.abs(dtS - this.lastIntervalS) > 1e-12 * dtS) this.discretise(dtS);
+    // (Reused within a run only, and the first interval of a run is the same in every run.)
     this.value = this.phi * this.value + (this.sdDrive > 0 ? this.sdDrive * rng.normal() : 0);
     return this.value;
   }
