@@ -100,6 +100,12 @@ export interface MeasurementGeometry {
   northM: number;
   eastM: number;
   headingRad: number;
+  /**
+   * True to return every row whatever the sensor's range and field of view:
+   * a simulated filter predicts, from its own estimate, each measurement the
+   * sensor made from the true pose.
+   */
+  everyRow?: boolean;
 }
 
 /** An aiding sensor's measurement schedule. */

@@ -42,8 +42,8 @@ export const rangeBearing: SensorKindSpec = {
       for (const lm of landmarks) {
         const dN = lm.northM - g.northM, dE = lm.eastM - g.eastM;
         const r = Math.hypot(dN, dE);
-        if (r > maxRangeM) continue;
-        if (Math.abs(wrapAngle(Math.atan2(dE, dN) - g.headingRad)) > fovRad / 2 + 1e-12) continue;
+        if (!g.everyRow && r > maxRangeM) continue;
+        if (!g.everyRow && Math.abs(wrapAngle(Math.atan2(dE, dN) - g.headingRad)) > fovRad / 2 + 1e-12) continue;
         if (r < MIN_LANDMARK_RANGE_M) throw new InputError(lm.path, `lies on the vehicle's nominal path (range ${r.toExponential(2)} m); move it off the path`);
         if (observables !== 'bearing') {
           rows.push({

@@ -21,11 +21,11 @@ function quantise(x: number, q: number): number {
  * Dead reckoning (the filter's navigation solution) integrates those outputs
  * nonlinearly, corrected with the filter's current calibration estimates:
  * heading first (ψ̂ grows at the corrected rate), then position along the
- * estimated heading: each speed sample moves the estimate by v̂ ∫[cos ψ̂, sin ψ̂] dt
- * over its interval (the integral by the midpoint rule on sub-intervals that
- * split at every gyro sample, exact to (ω̂ Δt)²/24). The sensors' samples are
- * used over the interval they describe, one sample ahead of a real-time
- * implementation.
+ * estimated heading: position moves by v̂ [cos ψ̂, sin ψ̂] dt, the integral by
+ * the midpoint rule on sub-intervals that split at every gyro and speed
+ * sample (exact to (ω̂ Δt)²/24). Each sample is used over the interval it
+ * describes, so the dead reckoning runs one sample ahead of a real-time
+ * implementation (which would lag by up to a sample period).
  */
 export class DeadReckoningRun {
   readonly truth: ScalarProcess[];
@@ -44,9 +44,7 @@ export class DeadReckoningRun {
   private lastTrueDistanceM = 0;
   private rateRadps = 0;
   private gyroIndex = 0;
-  private wheelIndex = 1;
-  private cosSum = 0;
-  private sinSum = 0;
+  private wheelIndex = 0;
   private readonly gyroClock: PathClock;
   private readonly wheelClock: PathClock;
   private readonly gyroStates: number[];
@@ -62,6 +60,7 @@ export class DeadReckoningRun {
     const { heading, along } = plan.model.core;
     const coupled = (row: number) => plan.calibration.map((c) => c.state).filter((s) => this.coefficient(row, s, 1, 1) !== 0);
     this.gyroStates = coupled(heading);
+    if (this.gyroStates.some((s) => plan.fSpeed[heading * plan.n + s] !== 0)) throw new Error('internal: a gyro error that depends on the speed');
     this.speedStates = coupled(along);
     this.gyroClock = new PathClock(plan.mission);
     this.wheelClock = new PathClock(plan.mission);
@@ -104,31 +103,14 @@ export class DeadReckoningRun {
     this.headingRad = m.startHeadingRad + initialErrors.headingRad;
     this.timeS = 0;
     this.gyroIndex = 0;
-    this.wheelIndex = 1;
-    this.cosSum = this.sinSum = 0;
+    this.wheelIndex = 0;
     this.speedMps = this.trueSpeedMps = 0;
     this.lastTrueDistanceM = 0;
     this.moving = false;
     this.gyroClock.reset();
     this.wheelClock.reset();
     this.readGyro(rng);
-    if (this.plan.speed) this.readStartSpeed(rng);
-  }
-
-  /** The speed output at t = 0 (the instantaneous start speed with its errors); it moves nothing. */
-  private readStartSpeed(rng: RunRandom): void {
-    const { whiteSigmaSI, quantumSI } = this.plan.speed!;
-    const trueSpeed = this.plan.mission.segments[0].speedStartMps;
-    const { along } = this.plan.model.core;
-    let measured = 0;
-    if (trueSpeed > 0) {
-      let error = 0;
-      for (const s of this.speedStates) error += this.coefficient(along, s, trueSpeed, 0) * this.truth[s].value;
-      measured = quantise(trueSpeed + error + (whiteSigmaSI > 0 ? whiteSigmaSI * rng.normal() : 0), quantumSI);
-    }
-    this.speedMps = measured > 0 ? this.invert(along, this.speedStates, measured, 0, 1) : 0;
-    this.trueSpeedMps = trueSpeed;
-    this.moving = measured > 0;
+    if (this.plan.speed) this.readSpeed(rng);
   }
 
   /** Integrates up to t1S (after the current time); returns the dead-reckoned heading change, rad. */
@@ -141,7 +123,7 @@ export class DeadReckoningRun {
     let cosPsi = Math.cos(this.headingRad), sinPsi = Math.sin(this.headingRad);
     while (this.timeS < t1S - 1e-12) {
       const nextGyroS = (this.gyroIndex + 1) / gyroRate;
-      const nextWheelS = wheelRate > 0 ? this.wheelIndex / wheelRate : Infinity;
+      const nextWheelS = wheelRate > 0 ? (this.wheelIndex + 1) / wheelRate : Infinity;
       let t = Math.min(nextGyroS, nextWheelS, t1S);
       if (Math.abs(t - t1S) < 1e-9) t = t1S;
       const d = t - this.timeS;
@@ -150,13 +132,16 @@ export class DeadReckoningRun {
       const h2 = half * half;
       const ch = 1 - 0.5 * h2 * (1 - h2 / 12), sh = half * (1 - (h2 / 6) * (1 - h2 / 20));
       const cosMid = cosPsi * ch - sinPsi * sh, sinMid = sinPsi * ch + cosPsi * sh;
-      this.cosSum += cosMid * d;
-      this.sinSum += sinMid * d;
+      this.northM += this.speedMps * cosMid * d;
+      this.eastM += this.speedMps * sinMid * d;
       cosPsi = cosMid * ch - sinMid * sh;
       sinPsi = sinMid * ch + cosMid * sh;
       this.headingRad += this.rateRadps * d;
       this.timeS = t;
-      if (nextWheelS <= t + 1e-9) this.readSpeed(rng);
+      if (nextWheelS <= t + 1e-9) {
+        this.wheelIndex++;
+        this.readSpeed(rng);
+      }
       if (nextGyroS <= t + 1e-9) {
         this.gyroIndex++;
         this.readGyro(rng);
@@ -175,32 +160,34 @@ export class DeadReckoningRun {
     const trueRate = (this.at.headingRad - psi0) * rateHz;
     const { heading } = this.plan.model.core;
     let error = 0;
-    for (const s of this.gyroStates) error += this.coefficient(heading, s, 0, trueRate) * this.truth[s].advanceTo(t0, rng);
+    const { f0, fTurn } = this.plan;
+    const row = heading * this.n;
+    // The gyro row of F has no per-speed terms in the planar model (checked in the constructor).
+    for (let i = 0; i < this.gyroStates.length; i++) {
+      const s = this.gyroStates[i];
+      error += (f0[row + s] + trueRate * fTurn[row + s]) * this.truth[s].advanceTo(t0, rng);
+    }
     const measured = quantise(trueRate + error + (whiteSigmaSI > 0 ? whiteSigmaSI * rng.normal() : 0), quantumSI);
     this.rateRadps = this.invert(heading, this.gyroStates, measured, this.speedMps, 0);
   }
 
-  /** The speed sample at i/f over the interval before it; moves the position estimate along the estimated heading. */
+  /** The speed sample over [i/f, (i+1)/f]: true mean speed plus errors, rounded, corrected by the estimates (a parked wheel reads zero). */
   private readSpeed(rng: RunRandom): void {
     const { rateHz, whiteSigmaSI, quantumSI } = this.plan.speed!;
-    const t1 = this.wheelIndex / rateHz;
-    const d0 = this.lastTrueDistanceM;
-    this.wheelClock.at(t1, this.at);
+    const t0 = this.wheelIndex / rateHz;
+    const d0 = this.wheelIndex === 0 ? 0 : this.lastTrueDistanceM;
+    this.wheelClock.at((this.wheelIndex + 1) / rateHz, this.at);
     this.lastTrueDistanceM = this.at.distanceM;
     const trueSpeed = (this.at.distanceM - d0) * rateHz;
     const { along } = this.plan.model.core;
     let measured = 0;
     if (trueSpeed > 0) {
       let error = 0;
-      for (const s of this.speedStates) error += this.coefficient(along, s, trueSpeed, 0) * this.truth[s].advanceTo(t1, rng);
+      for (const s of this.speedStates) error += this.coefficient(along, s, trueSpeed, 0) * this.truth[s].advanceTo(t0, rng);
       measured = quantise(trueSpeed + error + (whiteSigmaSI > 0 ? whiteSigmaSI * rng.normal() : 0), quantumSI);
     }
     this.speedMps = measured > 0 ? this.invert(along, this.speedStates, measured, 0, 1) : 0;
     this.trueSpeedMps = trueSpeed;
     this.moving = measured > 0;
-    this.northM += this.speedMps * this.cosSum;
-    this.eastM += this.speedMps * this.sinSum;
-    this.cosSum = this.sinSum = 0;
-    this.wheelIndex++;
   }
 }

@@ -38,8 +38,10 @@ export class PathClock {
     while (this.segment < segs.length - 1 && tS >= segs[this.segment].endS) this.segment++;
     const s = segs[this.segment];
     const tau = Math.min(tS, s.endS) - s.startS;
+    // Past the mission's end (a sample interval that straddles it) the vehicle keeps its final speed and turn rate.
+    const beyond = Math.max(0, tS - s.endS);
     const accel = (s.speedEndMps - s.speedStartMps) / (s.endS - s.startS);
-    out.headingRad = this.startHeadingRad[this.segment] + s.turnRateRadps * tau;
-    out.distanceM = this.startDistanceM[this.segment] + s.speedStartMps * tau + 0.5 * accel * tau * tau;
+    out.headingRad = this.startHeadingRad[this.segment] + s.turnRateRadps * (tau + beyond);
+    out.distanceM = this.startDistanceM[this.segment] + s.speedStartMps * tau + 0.5 * accel * tau * tau + s.speedEndMps * beyond;
   }
 }

@@ -45,7 +45,7 @@ export class PlanarSimulation implements MonteCarloModel {
   private readonly buffers: StepBuffers;
   private readonly hIdx: Int32Array;
   private readonly hVal: Float64Array;
-  private readonly geometry: MeasurementGeometry = { northM: 0, eastM: 0, headingRad: 0 };
+  private readonly geometry: MeasurementGeometry = { northM: 0, eastM: 0, headingRad: 0, everyRow: true };
   private readonly trueGeometry: MeasurementGeometry = { northM: 0, eastM: 0, headingRad: 0 };
 
   constructor(private readonly plan: PlanarPlan, budget: BudgetSeries) {

@@ -7,7 +7,7 @@ import type { RunRandom } from './run-random';
  * Over any interval Δ the exact discretisation is x ← φ x + √Q_d n with
  *   φ = e^{-Δ/T},  Q_d = q T (1 - φ²) / 2   (Gauss-Markov),
  *   φ = 1,         Q_d = q Δ                (random walk; q = 0: constant)
- * (Gelb, Applied Optimal Estimation, 1974, Table 3.4-1 and §4.2; Maybeck,
+ * (Gelb, Applied Optimal Estimation, 1974, Table 3.4-1 and §4.2, sections from memory; Maybeck,
  * Stochastic Models, Estimation, and Control, vol. 1, 1979, §4.9). The last
  * interval's φ and √Q_d are kept, so a fixed sample rate pays one exp.
  */

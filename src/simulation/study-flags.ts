@@ -47,15 +47,21 @@ export function findFlags(stats: StudyStatistics, outages: SimulatedOutage[]): S
   return flags.sort((x, y) => x.startS - y.startS);
 }
 
-/** [first, last, worst] step of each run of consecutive steps where `over` holds. */
+/**
+ * [first, last, worst] step of each stretch where `over` holds, joining
+ * stretches less than 1 % of the mission apart (at least 10 steps): a
+ * statistic hovering at its bound crosses it back and forth.
+ */
 function stretches(steps: number, over: (k: number) => boolean, score: (k: number) => number): [number, number, number][] {
+  const gap = Math.max(10, Math.ceil(steps / 100));
   const out: [number, number, number][] = [];
   for (let k = 0; k < steps; k++) {
     if (!over(k)) continue;
     let worst = k, end = k;
-    while (end + 1 < steps && over(end + 1)) {
-      end++;
-      if (score(end) > score(worst)) worst = end;
+    for (let j = k + 1; j < steps && j - end <= gap; j++) {
+      if (!over(j)) continue;
+      end = j;
+      if (score(j) > score(worst)) worst = j;
     }
     out.push([k, end, worst]);
     k = end;

@@ -39,7 +39,7 @@ function expectCorrelation(r: number, rho: number): void {
 
 describe('exact discrete error processes', () => {
   it('a Gauss-Markov process keeps its stationary variance and has autocorrelation e^(-τ/T)', () => {
-    // Gelb 1974, Table 3.4-1: first-order Gauss-Markov, R(τ) = σ² e^{-|τ|/T}; PSD of the driving noise 2σ²/T.
+    // Gelb 1974, Table 3.4-1 (from memory): first-order Gauss-Markov, R(τ) = σ² e^{-|τ|/T}; PSD of the driving noise 2σ²/T.
     const sigma = 2, T = 5;
     const make = () => new ScalarProcess(1 / T, (2 * sigma * sigma) / T);
     const [x10, x10p1, x15, x37] = realisations(make, sigma, [10, 10.1, 15, 37.3]);
@@ -57,7 +57,7 @@ describe('exact discrete error processes', () => {
   });
 
   it('a random walk grows as q t and is correlated √(t1/t2) between two times', () => {
-    // Wiener process: Var x(t) = q t, Cov(x(t1), x(t2)) = q min(t1, t2) (Maybeck 1979, §4.5).
+    // Wiener process: Var x(t) = q t, Cov(x(t1), x(t2)) = q min(t1, t2) (Maybeck 1979, §4.5, section from memory).
     const q = 0.3;
     const [x5, x20] = realisations(() => new ScalarProcess(0, q), 0, [5, 20]);
     expectVariance(x5, q * 5);
