@@ -1,17 +1,19 @@
 import { InputError } from '../errors';
-import type { ConfidenceLevel, QuantityName } from '../inputs/budget-input';
+import type { ConfidenceLevel } from '../inputs/budget-input';
+import { QUANTITY_NAMES, quantitySpec, type QuantityName } from '../inputs/quantities';
 import type { BudgetSeries, VarianceQuantity } from './budget-series';
 import { confidenceFactor1D } from './confidence';
+import type { DimensionName } from '../units';
 
 /** The levels a requirement may use. */
 export const LEVELS: readonly ConfidenceLevel[] = ['1sigma', '2sigma', '95%', '50%'];
 
-/** The quantities a requirement may constrain. */
-export const QUANTITY_NAMES: readonly QuantityName[] = ['heading', 'speed', 'north', 'east', 'along-track', 'cross-track', 'horizontal'];
+/** The quantities a requirement may constrain (from the quantity table, src/inputs/quantities.ts). */
+export { QUANTITY_NAMES };
 
-/** Dimension of a quantity's limit. */
-export function limitDimension(q: QuantityName): 'angle' | 'speed' | 'length' {
-  return q === 'heading' ? 'angle' : q === 'speed' ? 'speed' : 'length';
+/** Dimension of a quantity's limit. Throws nothing for a quantity of the table. */
+export function limitDimension(q: QuantityName): DimensionName {
+  return quantitySpec(q).dimension;
 }
 
 /**

@@ -122,4 +122,6 @@ export interface ErrorModel {
   dynamics(speedMps: number, turnRateRadps: number): Float64Array;
   /** True when the suite has a speed input (speed outputs exist). */
   hasSpeedInput: boolean;
+  /** SI unit of what each measurement measures, by noise key (`gnss.north` -> `m`), as the sensor kinds declare it. */
+  measurementUnitsSI: Readonly<Record<string, string>>;
 }

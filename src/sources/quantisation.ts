@@ -3,6 +3,12 @@ import type { ConversionStep } from '../covariance/error-model';
 import type { DimensionName } from '../units';
 import { readMagnitude, rowRateHz, type SourceKindSpec } from './source-kind';
 
+declare module '../inputs/budget-input' {
+  interface SourceKindMap {
+    quantisation: true;
+  }
+}
+
 /** Quantisation: the least significant bit of a reported rate or speed, or of an output angle increment. */
 export const quantisationSpec: SourceKindSpec = {
   kind: 'quantisation',
@@ -15,6 +21,7 @@ export const quantisationSpec: SourceKindSpec = {
     { field: 'value', label: 'LSB', dimensions: ['angular-rate', 'speed', 'angle'], range: '>= 0', required: true },
     { field: 'rate', label: 'output rate', dimensions: ['frequency'], range: '> 0', required: false },
   ],
+  idBase: 'lsb',
 };
 
 /** Quantisation in SI. */
