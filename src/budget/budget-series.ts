@@ -4,7 +4,7 @@ import type { NominalTrajectory } from '../mission/nominal-trajectory';
 import { fastRadiusForProbability } from './horizontal-radius-table';
 import { quantitySpec, VARIANCE_QUANTITIES, type VarianceQuantity } from '../inputs/quantities';
 
-/** Quantities reported as variances with per-source contributions (ENGINE.md §8), from the quantity table. */
+/** Quantities reported as variances with per-source contributions (docs/planar-model.md §8), from the quantity table. */
 export { VARIANCE_QUANTITIES, type VarianceQuantity };
 
 /** One quantity's variance over time: the total and each source's share (they sum to the total). */
@@ -30,7 +30,7 @@ export interface BudgetSeries {
  * Turns the recorded covariance entries into variance series. North/east
  * come from the path frame by the heading: north = [cos, -sin] p, east =
  * [sin, cos] p. Speed is v² P[so,so] plus the speed sensor's per-sample white
- * variance while moving; heading adds any angle-quantum variance (ENGINE.md §8).
+ * variance while moving; heading adds any angle-quantum variance (docs/planar-model.md §8).
  */
 export function buildBudgetSeries(model: ErrorModel, traj: NominalTrajectory, hist: CovarianceHistory): BudgetSeries {
   const steps = hist.steps, S = hist.sourceCount;

@@ -19,7 +19,7 @@ export function limitDimension(q: QuantityName): DimensionName {
 /**
  * The series a requirement compares with its limit, in SI: a 1-D quantity's
  * sigma times the level's factor; for 'horizontal', DRMS (1σ), 2DRMS (2σ),
- * the exact R95 (95 %) or CEP (50 %) (ENGINE.md §8).
+ * the exact R95 (95 %) or CEP (50 %) (docs/planar-model.md §8).
  * @throws InputError when the suite does not produce the quantity.
  */
 export function levelSeries(series: BudgetSeries, quantity: QuantityName, level: ConfidenceLevel, path: string): Float64Array {

@@ -37,7 +37,7 @@ export class ModelBuilder {
       heading: this.state('heading', { name: 'heading error', unitSI: 'rad', calibration: false }),
       speedScale: -1,
     };
-    // Path-frame kinematics (ENGINE.md §3 rotated by the heading): the frame turns at w.
+    // Path-frame kinematics (docs/planar-model.md §3 rotated by the heading): the frame turns at w.
     this.term(this.core.along, this.core.cross, { perTurnRate: 1 });
     this.term(this.core.cross, this.core.along, { perTurnRate: -1 });
     this.term(this.core.cross, this.core.heading, { perSpeed: 1 });

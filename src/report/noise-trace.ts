@@ -30,7 +30,7 @@ const conversionsOf = (model: ErrorModel, s: number) => model.sources[s].convers
 
 /**
  * Collects every R, continuous Q (PSD per noise channel) and P0 entry with
- * the sources that own it (ENGINE.md §8: "the R and Q actually used, each
+ * the sources that own it (docs/planar-model.md §8: "the R and Q actually used, each
  * entry traced to its rows and unit conversions").
  */
 export function traceNoise(model: ErrorModel): NoiseTrace {

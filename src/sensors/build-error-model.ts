@@ -8,7 +8,7 @@ import { SENSOR_KIND_NAMES, SENSOR_KINDS } from './registry';
 import type { Placement, PlacedSuite, SensorStates } from './sensor-kind';
 import { checkSuite } from './suite-rules';
 
-/** Ids of the two sources the mission owns (ENGINE.md §7). */
+/** Ids of the two sources the mission owns (docs/planar-model.md §7). */
 export const INITIAL_POSITION_ID = 'mission.initialPosition';
 export const INITIAL_HEADING_ID = 'mission.initialHeading';
 

@@ -16,7 +16,7 @@ declare module '../inputs/budget-input' {
   }
 }
 
-/** Compass heading, y = psi + bm + r (ENGINE.md §5). */
+/** Compass heading, y = psi + bm + r (docs/planar-model.md §5). */
 export const compass: SensorKindSpec<'compass'> = defineSensorKind({
   kind: 'compass',
   label: 'compass heading',

@@ -18,7 +18,7 @@ declare module '../inputs/budget-input' {
 }
 
 /**
- * GNSS horizontal position, y = p + m + r per axis (ENGINE.md §5). Multipath
+ * GNSS horizontal position, y = p + m + r per axis (docs/planar-model.md §5). Multipath
  * is either a Gauss-Markov state per axis (in H) or folded into R.
  */
 export const gnssPosition: SensorKindSpec<'gnss-position'> = defineSensorKind({

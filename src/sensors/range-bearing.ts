@@ -34,7 +34,7 @@ const COMPONENT: RowOptionSpec = {
 
 /**
  * Range and bearing (relative to heading) to known landmarks within a maximum
- * range and field of view (ENGINE.md §5):
+ * range and field of view (docs/planar-model.md §5):
  * range = |L - p| + br + r, bearing = atan2(dE_L, dN_L) - psi + bb + r.
  */
 export const rangeBearing: SensorKindSpec<'range-bearing'> = defineSensorKind({

@@ -18,7 +18,7 @@ declare module '../inputs/budget-input' {
 
 /**
  * Wheel speed / odometer (also a water-speed log, same model), integrated for
- * position: along' gets v so + nv (ENGINE.md §3). A parked wheel reads zero,
+ * position: along' gets v so + nv (docs/planar-model.md §3). A parked wheel reads zero,
  * so its white noise is off while the speed is zero.
  */
 export const wheelSpeed: SensorKindSpec<'wheel-speed'> = defineSensorKind({

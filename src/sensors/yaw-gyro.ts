@@ -23,7 +23,7 @@ declare module '../inputs/budget-input' {
 }
 
 /**
- * The yaw-rate gyro, integrated for heading (ENGINE.md §3):
+ * The yaw-rate gyro, integrated for heading (docs/planar-model.md §3):
  * dpsi' = bc + bbi + brw + w sg + ng.
  */
 export const yawGyro: SensorKindSpec<'yaw-gyro'> = defineSensorKind({

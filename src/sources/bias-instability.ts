@@ -11,7 +11,7 @@ declare module '../inputs/budget-input' {
   }
 }
 
-/** Bias instability as a first-order Gauss-Markov state (ENGINE.md §3). */
+/** Bias instability as a first-order Gauss-Markov state (docs/planar-model.md §3). */
 export const biasInstabilitySpec: SourceKindSpec = {
   kind: 'bias-instability',
   label: 'bias instability',
@@ -49,7 +49,7 @@ export interface ResolvedGaussMarkov {
 /**
  * Resolves a bias-instability row: sigma = floor / 0.6173643 so that the
  * Gauss-Markov Allan deviation peaks at the floor (at tau = 1.8926 T), and
- * the driving PSD is 2 σ²/T (ENGINE.md §3).
+ * the driving PSD is 2 σ²/T (docs/planar-model.md §3).
  * @throws InputError for a missing or non-positive correlation time.
  */
 export function resolveBiasInstability(row: SourceInput, dimension: DimensionName, path: string): ResolvedGaussMarkov {

@@ -41,7 +41,7 @@ export interface ResolvedMultipath {
 }
 
 /**
- * Resolves a multipath row (ENGINE.md §5).
+ * Resolves a multipath row (docs/planar-model.md §5).
  * @throws InputError for a negative sigma, or states without a positive correlation time.
  */
 export function resolveMultipath(row: SourceInput, path: string): ResolvedMultipath {

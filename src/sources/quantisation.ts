@@ -26,7 +26,7 @@ export const quantisationSpec: SourceKindSpec = {
 
 /** Quantisation in SI. */
 export interface ResolvedQuantisation {
-  /** Per-sample variance q²/12 (Widrow, Kollár & Liu 1996; REFERENCES.md §9). */
+  /** Per-sample variance q²/12 (Widrow, Kollár & Liu 1996; docs/checks.md §9). */
   perSampleVarianceSI: number;
   /** Two-sided PSD q²/(12 f_s) for a rate or speed LSB; 0 for an angle quantum. */
   psdSI: number;

@@ -27,7 +27,7 @@ export interface ResolvedRateRandomWalk {
 
 /**
  * Resolves a rate-random-walk row (heading sigma grows as K t^1.5/√3,
- * REFERENCES.md §4.3).
+ * docs/checks.md §4.3).
  * @throws InputError for a negative value or a unit that is not a rate random walk.
  */
 export function resolveRateRandomWalk(row: SourceInput, path: string): ResolvedRateRandomWalk {

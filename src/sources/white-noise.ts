@@ -49,7 +49,7 @@ export interface ResolvedWhiteNoise {
 /**
  * Resolves a white-noise row (IEEE Std 952 two-sided convention: a rate noise
  * of two-sided PSD N² has angle random walk N, and N = σ_d/√f_s for a
- * per-sample sigma σ_d at rate f_s; REFERENCES.md §2). A density marked
+ * per-sample sigma σ_d at rate f_s; docs/checks.md §2). A density marked
  * one-sided is divided by √2.
  * @throws InputError for a negative value or a unit of neither accepted dimension.
  */
