@@ -29,8 +29,8 @@ export interface PlacedSuite {
   statesOf<K extends SensorKind>(kind: K): readonly SensorStates<K>[];
 }
 
-/** What phase 1 of placing one sensor returns. */
-export interface Placement<K extends SensorKind> {
+/** What phase 1 of placing one sensor returns; `B` is the model's builder (the planar {@link ModelBuilder} by default). */
+export interface Placement<K extends SensorKind, B = ModelBuilder> {
   /** Indices of this sensor's states that other sensors may reach (typed per kind). */
   states: SensorStates<K>;
   /**
@@ -38,7 +38,7 @@ export interface Placement<K extends SensorKind> {
    * measurement streams, which may refer to another sensor's states through
    * `suite`. Must not create states or sources (their order is phase 1's).
    */
-  measurements?(b: ModelBuilder, suite: PlacedSuite): void;
+  measurements?(b: B, suite: PlacedSuite): void;
 }
 
 /** A scalar measurement a sensor produces: the suffix of its noise key (`gnss.north`) and the SI unit of what it measures. */
@@ -73,7 +73,7 @@ export type SuiteInput = 'heading-rate' | 'speed';
  * Everything a sensor kind declares about itself; the engine, the schema,
  * the edits and the page read these fields instead of lists of their own.
  */
-export interface SensorKindSpec<K extends SensorKind = SensorKind> {
+export interface SensorKindSpec<K extends SensorKind = SensorKind, B = ModelBuilder> {
   kind: K;
   /** In words, for messages and the page ("compass heading"). */
   label: string;
@@ -107,11 +107,11 @@ export interface SensorKindSpec<K extends SensorKind = SensorKind> {
    * model, and returns its state handles and its phase 2.
    * @throws InputError naming the field of a bad row or setting.
    */
-  place(builder: ModelBuilder, sensor: SensorInput, ctx: SensorContext): Placement<K>;
+  place(builder: B, sensor: SensorInput, ctx: SensorContext): Placement<K, B>;
 }
 
 /** A sensor kind's spec with `sourceKinds` filled in from `rows`. */
-export function defineSensorKind<K extends SensorKind>(spec: Omit<SensorKindSpec<K>, 'sourceKinds'>): SensorKindSpec<K> {
+export function defineSensorKind<K extends SensorKind, B = ModelBuilder>(spec: Omit<SensorKindSpec<K, B>, 'sourceKinds'>): SensorKindSpec<K, B> {
   return { ...spec, sourceKinds: Object.keys(spec.rows) as SourceKind[] };
 }
 
