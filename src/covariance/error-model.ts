@@ -1,11 +1,11 @@
 /**
  * The linearised error-state model assembled from the suite's rows
- * (ENGINE.md §3, §5): which states exist, how each source feeds P0, the
+ * (docs/planar-model.md §3, §5): which states exist, how each source feeds P0, the
  * continuous process noise and R, and which measurements are made when.
  *
  * Position error states are kept in the path frame (along-track, cross-track)
  * where, on a segment of constant speed and turn rate, the dynamics are time
- * invariant (ENGINE.md §4); north/east come from a rotation by the heading.
+ * invariant (docs/planar-model.md §4); north/east come from a rotation by the heading.
  */
 
 /** A unit-conversion step, kept so R and Q entries trace back to their rows. */
@@ -40,7 +40,7 @@ export interface MeasurementNoisePiece {
   derivation: string;
 }
 
-/** One error source with every piece of P0, Q and R it owns (ENGINE.md §7). */
+/** One error source with every piece of P0, Q and R it owns (docs/planar-model.md §7). */
 export interface ModelSource {
   /** `sensorId.rowId`, or `mission.initialPosition` / `mission.initialHeading`. */
   id: string;
@@ -140,4 +140,6 @@ export interface ErrorModel {
   hasSpeedInput: boolean;
   /** Output rates of the yaw gyro and the speed sensor, Hz (0 when absent; aiding sensors carry theirs in `streams`). */
   deadReckoningRateHz: { gyro: number; speed: number };
+  /** SI unit of what each measurement measures, by noise key (`gnss.north` -> `m`), as the sensor kinds declare it. */
+  measurementUnitsSI: Readonly<Record<string, string>>;
 }
