@@ -33,3 +33,11 @@ export type { CheckpointBudget, QuantityBudget, SourceShare } from './budget/che
 export { sizeSource, type SizingResult } from './budget/sizing';
 export { computeBudget, MAX_STEPS, type BudgetResult } from './pipeline';
 export * from './inertial';
+export type { MonteCarloModel, RunSink, SimulatedQuantity, NeesGroup, SimulatedOutage } from './simulation/monte-carlo-model';
+export { RunRandom } from './simulation/run-random';
+export { planarSimulation } from './simulation/planar-study';
+export { runBlocks, type BlockRange } from './simulation/run-blocks';
+export { RUNS_PER_BLOCK, blockCount, shardBlocks, reduceNodes, type BlockNode } from './simulation/block-tree';
+export { studyStatistics, type StudyStatistics, type QuantityStatistics, type NeesStatistics } from './simulation/study-statistics';
+export { findFlags, type SimulationFlag } from './simulation/study-flags';
+export { simulationVerdict, simulationJson, formatSimulationSummary, type StudyIdentity } from './simulation/simulation-report';

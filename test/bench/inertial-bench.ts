@@ -29,8 +29,8 @@ function scaled(factor: number): InertialBudgetInput {
 function withExtraSources(extra: number): InertialBudgetInput {
   const b = benchCase();
   for (let i = 0; i < extra; i++) {
-    b.imu.rows.push({ id: `extra${i}`, instrument: i % 2 ? 'gyro' : 'accelerometer', kind: 'quantisation',
-      value: i % 2 ? { value: 0.001 * (i + 1), unit: 'deg/s' } : { value: 0.1 * (i + 1), unit: 'mg' } });
+    b.aiding.push({ id: `baro${i}`, kind: 'barometer', rate: { value: 1, unit: 'Hz' },
+      rows: [{ id: 'white', kind: 'white-noise', value: { value: 0.5 * (i + 1), unit: 'm' } }] });
   }
   return b;
 }
