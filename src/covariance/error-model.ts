@@ -122,4 +122,9 @@ export interface ErrorModel {
   dynamics(speedMps: number, turnRateRadps: number): Float64Array;
   /** True when the suite has a speed input (speed outputs exist). */
   hasSpeedInput: boolean;
+  /**
+   * The builder's key of each state (`gyro#bias`, `gyro.bi#gm`), indexed like
+   * `states`: two models of one suite (truth and filter) match states by key.
+   */
+  stateKeys?: string[];
 }
