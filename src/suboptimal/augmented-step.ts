@@ -1,6 +1,6 @@
 /**
  * Φ and Q_d of the augmented state z = [x; e] of a suboptimal-filter
- * analysis, where x is the truth's error state (n_t) and e = x̂ − T x the
+ * analysis, where x holds the truth's error states that reach e (n_x of n_t) and e = x̂ − T x the
  * filter's estimation error in its own states (n_f). Over one step
  *   x⁺ = Φ_t x + w,   x̂⁻ = Φ_f x̂   =>   e⁻ = Φ_f e + (Φ_f T − T Φ_t) x − T w,
  * so Φ_a = [[Φ_t, 0], [Φ_f T − T Φ_t, Φ_f]] and each truth source's
@@ -11,6 +11,7 @@
 import type { SparseEntries, StepDiscretisation } from '../covariance/discretise-step';
 import { propagationKernel, type PropagationKernel } from '../covariance/compiled-propagation';
 import { toSparseRows, type SparseRows } from '../covariance/sparse-rows';
+import type { CarriedStates } from './carried-states';
 
 /** One step of the augmented model. */
 export interface AugmentedStep {
@@ -25,12 +26,15 @@ export interface AugmentedStep {
 export class AugmentedSteps {
   private readonly cache = new Map<StepDiscretisation, { filter: StepDiscretisation; phiT: Float64Array; phiF: Float64Array; qT: Float64Array; step: AugmentedStep }>();
   private readonly nt: number;
-  private readonly nf: number;
+  private readonly nx: number;
 
-  /** @param truthMap T, row-major n_f x n_t. */
-  constructor(nt: number, nf: number, private readonly truthMap: Float64Array) {
+  /**
+   * @param truthMap T, row-major n_f x n_t.
+   * @param carried the truth states x carries (see carried-states.ts).
+   */
+  constructor(nt: number, private readonly nf: number, private readonly truthMap: Float64Array, private readonly carried: CarriedStates) {
     this.nt = nt;
-    this.nf = nf;
+    this.nx = carried.index.length;
   }
 
   /** The augmented step of a truth step and the filter step over the same piece of time. */
@@ -44,19 +48,20 @@ export class AugmentedSteps {
   }
 
   private build(truth: StepDiscretisation, filter: StepDiscretisation): AugmentedStep {
-    const { nt, nf } = this;
-    const na = nt + nf;
+    const { nt, nf, nx } = this;
+    const na = nx + nf, at = this.carried.index;
     const phiT = dense(truth.phi), phiF = dense(filter.phi), T = this.truthMap;
     const a = new Float64Array(na * na);
-    for (let i = 0; i < nt; i++) for (let j = 0; j < nt; j++) a[i * na + j] = phiT[i * nt + j];
+    for (let i = 0; i < nx; i++) for (let j = 0; j < nx; j++) a[i * na + j] = phiT[at[i] * nt + at[j]];
     for (let i = 0; i < nf; i++) {
-      for (let j = 0; j < nf; j++) a[(nt + i) * na + nt + j] = phiF[i * nf + j];
-      // (Φ_f T − T Φ_t)[i][j]
-      for (let j = 0; j < nt; j++) {
+      for (let j = 0; j < nf; j++) a[(nx + i) * na + nx + j] = phiF[i * nf + j];
+      // (Φ_f T − T Φ_t)[i][j] on the carried columns (the others are zero: carried-states.ts)
+      for (let c = 0; c < nx; c++) {
+        const j = at[c];
         let d = 0;
         for (let k = 0; k < nf; k++) d += phiF[i * nf + k] * T[k * nt + j];
         for (let k = 0; k < nt; k++) d -= T[i * nt + k] * phiT[k * nt + j];
-        a[(nt + i) * na + j] = d;
+        a[(nx + i) * na + c] = d;
       }
     }
     // Exact non-zeros only: an exactly zero coupling (filter = truth) costs nothing.
@@ -67,23 +72,24 @@ export class AugmentedSteps {
     return { phi, propagate: propagationKernel(phi), qdBySource, qdTotal: this.augmentNoise(sparseOf(total)) };
   }
 
-  /** [I; −T] Q [I; −T]ᵀ as sparse entries over n_a x n_a. */
+  /** [S; −T] Q [S; −T]ᵀ as sparse entries over n_a x n_a, S selecting the carried truth states. */
   private augmentNoise(q: SparseEntries): SparseEntries {
-    const { nt, nf } = this;
-    const na = nt + nf, T = this.truthMap;
+    const { nt, nf, nx } = this;
+    const na = nx + nf, T = this.truthMap, pos = this.carried.position;
+    // g = [S; −T] Q, n_a x n_t
     const g = new Float64Array(na * nt);
     for (let e = 0; e < q.index.length; e++) {
       const i = Math.floor(q.index[e] / nt), j = q.index[e] % nt;
-      g[i * nt + j] += q.val[e];
-      for (let r = 0; r < nf; r++) if (T[r * nt + i] !== 0) g[(nt + r) * nt + j] -= T[r * nt + i] * q.val[e];
+      if (pos[i] >= 0) g[pos[i] * nt + j] += q.val[e];
+      for (let r = 0; r < nf; r++) if (T[r * nt + i] !== 0) g[(nx + r) * nt + j] -= T[r * nt + i] * q.val[e];
     }
     const out = new Float64Array(na * na);
     for (let r = 0; r < na; r++) {
       for (let j = 0; j < nt; j++) {
         const v = g[r * nt + j];
         if (v === 0) continue;
-        out[r * na + j] += v;
-        for (let c = 0; c < nf; c++) if (T[c * nt + j] !== 0) out[r * na + nt + c] -= v * T[c * nt + j];
+        if (pos[j] >= 0) out[r * na + pos[j]] += v;
+        for (let c = 0; c < nf; c++) if (T[c * nt + j] !== 0) out[r * na + nx + c] -= v * T[c * nt + j];
       }
     }
     return sparseOf(out);

@@ -7,11 +7,14 @@
 import type { ErrorModel } from '../covariance/error-model';
 import type { CovarianceHistory, RecordedEntries } from '../covariance/run-covariance';
 import { sourceEntry, type SourceStorage } from '../covariance/source-storage';
+import type { CarriedStates } from './carried-states';
 
 /** Sizes and models of one run. */
 export interface RunLayout {
   nt: number;
   nf: number;
+  /** Truth states carried in x (n_x = carried.index.length); z = [x; e] has n_a = n_x + n_f entries. */
+  carried: CarriedStates;
   /** Storage of the truth's sources (slots hold n_a x n_a matrices, vectors n_a entries). */
   plan: SourceStorage;
   truth: ErrorModel;
@@ -32,8 +35,8 @@ export interface AugmentedState {
  * rank-one ψ = √v [e_i; −T e_i], added to the total and to its source.
  */
 export function initialiseAugmented(layout: RunLayout, truthMap: Float64Array): AugmentedState {
-  const { nt, nf, plan, truth, filter } = layout;
-  const na = nt + nf, nn = na * na;
+  const { nt, nf, plan, truth, filter, carried } = layout;
+  const nx = carried.index.length, na = nx + nf, nn = na * na;
   const st: AugmentedState = {
     filterP: new Float64Array(nf * nf), mats: new Float64Array(plan.denseCount * nn),
     vecs: new Float64Array(Math.max(1, plan.vectors) * na), rOfSlot: new Float64Array(plan.denseCount),
@@ -44,8 +47,8 @@ export function initialiseAugmented(layout: RunLayout, truthMap: Float64Array): 
     src.initialVariance.forEach(({ state, varianceSI }, j) => {
       const root = Math.sqrt(varianceSI);
       psi.fill(0);
-      psi[state] = root;
-      for (let r = 0; r < nf; r++) psi[nt + r] = -truthMap[r * nt + state] * root;
+      if (carried.position[state] >= 0) psi[carried.position[state]] = root;
+      for (let r = 0; r < nf; r++) psi[nx + r] = -truthMap[r * nt + state] * root;
       addOuter(st.mats, 0, psi);
       if (plan.denseSlot[s] >= 0) addOuter(st.mats, plan.denseSlot[s] * nn, psi);
       else if (plan.vectorCount[s] > 0) st.vecs.set(psi, (plan.firstVector[s] + j) * na);
@@ -101,23 +104,30 @@ export function recordBelieved(layout: RunLayout, st: AugmentedState, k: number,
  * every truth source, and the actual sigma of the filter's calibration states.
  */
 export function recordActual(layout: RunLayout, st: AugmentedState, k: number, h: CovarianceHistory): void {
-  const { nt, nf, plan, truth, filter } = layout;
-  const na = nt + nf;
+  const { nf, plan, truth, filter, carried } = layout;
+  const nx = carried.index.length, na = nx + nf;
   const idx = {
-    along: nt + filter.core.along, cross: nt + filter.core.cross, heading: nt + filter.core.heading,
-    speed: filter.core.speedScale >= 0 ? nt + filter.core.speedScale : truth.core.speedScale,
+    along: nx + filter.core.along, cross: nx + filter.core.cross, heading: nx + filter.core.heading,
+    speed: filter.core.speedScale >= 0 ? nx + filter.core.speedScale : truth.core.speedScale >= 0 ? carried.position[truth.core.speedScale] : -1,
   };
-  const e = h.entries;
+  const e = h.entries, { mats, vecs } = st;
   for (let m = 0; m <= h.sourceCount; m++) {
     const at = m * h.steps + k;
-    const entry = m === 0
-      ? (i: number, j: number) => st.mats[i * na + j]
-      : (i: number, j: number) => sourceEntry(plan, st.mats, st.vecs, na, m - 1, i, j);
-    e.alongAlong[at] = entry(idx.along, idx.along);
-    e.crossCross[at] = entry(idx.cross, idx.cross);
-    e.alongCross[at] = entry(idx.along, idx.cross);
-    e.headingHeading[at] = entry(idx.heading, idx.heading);
-    e.speedScale[at] = idx.speed >= 0 ? entry(idx.speed, idx.speed) : 0;
+    const slot = m === 0 ? 0 : plan.denseSlot[m - 1];
+    if (slot >= 0) {
+      const o = slot * na * na;
+      e.alongAlong[at] = mats[o + idx.along * na + idx.along];
+      e.crossCross[at] = mats[o + idx.cross * na + idx.cross];
+      e.alongCross[at] = mats[o + idx.along * na + idx.cross];
+      e.headingHeading[at] = mats[o + idx.heading * na + idx.heading];
+      e.speedScale[at] = idx.speed >= 0 ? mats[o + idx.speed * na + idx.speed] : 0;
+    } else {
+      e.alongAlong[at] = sourceEntry(plan, mats, vecs, na, m - 1, idx.along, idx.along);
+      e.crossCross[at] = sourceEntry(plan, mats, vecs, na, m - 1, idx.cross, idx.cross);
+      e.alongCross[at] = sourceEntry(plan, mats, vecs, na, m - 1, idx.along, idx.cross);
+      e.headingHeading[at] = sourceEntry(plan, mats, vecs, na, m - 1, idx.heading, idx.heading);
+      e.speedScale[at] = idx.speed >= 0 ? sourceEntry(plan, mats, vecs, na, m - 1, idx.speed, idx.speed) : 0;
+    }
   }
-  h.calibrationStates.forEach((i, c) => (h.calibrationSigma[c][k] = Math.sqrt(Math.max(0, st.mats[(nt + i) * na + nt + i]))));
+  h.calibrationStates.forEach((i, c) => (h.calibrationSigma[c][k] = Math.sqrt(Math.max(0, st.mats[(nx + i) * na + nx + i]))));
 }

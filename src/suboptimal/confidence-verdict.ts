@@ -5,7 +5,7 @@
  * actual error is smaller is conservative.
  */
 import { VARIANCE_QUANTITIES, type BudgetSeries, type VarianceQuantity } from '../budget/budget-series';
-import { DISPLAY, sigmaForDisplay } from '../report/display-units';
+import { DISPLAY, varianceFactor } from '../report/display-units';
 import { formatSignificant } from '../units';
 
 /** Ratios within this factor of 1 count as consistent (common practice, no source). */
@@ -39,8 +39,9 @@ export function confidenceVerdicts(believed: BudgetSeries, actual: BudgetSeries)
   return VARIANCE_QUANTITIES.flatMap((q) => {
     const b = believed.quantities[q], a = actual.quantities[q];
     if (!b || !a) return [];
+    const f = varianceFactor(q);
     const pair = (k: number): SigmaPair => {
-      const bs = sigmaForDisplay(q, Math.sqrt(Math.max(0, b.total[k]))), as = sigmaForDisplay(q, Math.sqrt(Math.max(0, a.total[k])));
+      const bs = Math.sqrt(Math.max(0, b.total[k] * f)), as = Math.sqrt(Math.max(0, a.total[k] * f));
       return { tS: actual.tS[k], believedSigma: bs, actualSigma: as, ratio: bs > 0 ? as / bs : as > 0 ? Infinity : 1 };
     };
     let hi = pair(0), lo = hi;

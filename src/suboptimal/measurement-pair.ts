@@ -20,20 +20,44 @@ export interface MeasurementPair {
  * Pairs the truth's and the filter's measurement at one boundary.
  * @throws InputError when the two schedules disagree (they come from one suite, so this is a defect).
  */
-export function measurementPair(truth: ScheduledMeasurement, filter: ScheduledMeasurement | undefined, truthMap: Float64Array, nt: number, nf: number): MeasurementPair {
+export function measurementPair(truth: ScheduledMeasurement, filter: ScheduledMeasurement | undefined, map: SparseTruthMap, g: Float64Array): MeasurementPair {
   if (!filter || filter.key !== truth.key) {
     throw new InputError('sensors', `the filter's measurements do not match the truth's at ${truth.key} (t = ${truth.tS} s)`);
   }
-  const g = new Float64Array(nt + nf);
-  for (let p = 0; p < truth.hIdx.length; p++) g[truth.hIdx[p]] -= truth.hVal[p];
+  const nt = map.nt;
+  const touched: number[] = [];
+  const add = (i: number, v: number) => {
+    if (g[i] === 0) touched.push(i);
+    g[i] += v;
+  };
+  for (let p = 0; p < truth.hIdx.length; p++) add(truth.hIdx[p], -truth.hVal[p]);
   for (let p = 0; p < filter.hIdx.length; p++) {
     const j = filter.hIdx[p], h = filter.hVal[p];
-    g[nt + j] += h;
-    for (let i = 0; i < nt; i++) g[i] += truthMap[j * nt + i] * h;
+    add(nt + j, h);
+    for (const i of map.truthOf[j]) add(i, h);
   }
-  let count = 0;
-  for (let i = 0; i < g.length; i++) if (g[i] !== 0) count++;
-  const gIdx = new Int32Array(count), gVal = new Float64Array(count);
-  for (let i = 0, c = 0; i < g.length; i++) if (g[i] !== 0) { gIdx[c] = i; gVal[c++] = g[i]; }
+  touched.sort((a, b) => a - b);
+  const kept = touched.filter((i) => g[i] !== 0);
+  const gIdx = Int32Array.from(kept), gVal = Float64Array.from(kept, (i) => g[i]);
+  for (const i of touched) g[i] = 0;
   return { truth, filter, gIdx, gVal };
+}
+
+/** T (0/1 entries) by filter state: the truth states each stands for. */
+export interface SparseTruthMap {
+  nt: number;
+  truthOf: number[][];
+}
+
+/** The sparse form of T (row-major n_f x n_t). */
+export function sparseTruthMap(truthMap: Float64Array, nt: number, nf: number): SparseTruthMap {
+  return { nt, truthOf: Array.from({ length: nf }, (_, j) => Array.from({ length: nt }, (_, i) => i).filter((i) => truthMap[j * nt + i] !== 0)) };
+}
+
+/** Renumbers g from [x (all n_t truth states); e] to [x (carried only); e]; g must vanish on dropped states. */
+export function carryPair(pair: MeasurementPair, position: Int32Array, nt: number, nx: number): void {
+  for (let p = 0; p < pair.gIdx.length; p++) {
+    const i = pair.gIdx[p];
+    pair.gIdx[p] = i < nt ? position[i] : i - nt + nx;
+  }
 }

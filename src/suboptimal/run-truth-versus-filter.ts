@@ -17,7 +17,8 @@ import { DiscretisationCache } from '../covariance/discretisation-cache';
 import { scheduleMeasurements } from '../covariance/measurement-schedule';
 import { planSourceStorage } from '../covariance/source-storage';
 import { AugmentedSteps } from './augmented-step';
-import { measurementPair, type MeasurementPair } from './measurement-pair';
+import { carryPair, measurementPair, sparseTruthMap, type MeasurementPair } from './measurement-pair';
+import { carriedStates, couplingIndices } from './carried-states';
 import { allocateHistory, initialiseAugmented, recordActual, recordBelieved, type AugmentedState, type RunLayout } from './augmented-storage';
 import { josephUpdateErrorBlock, updateErrorVectors } from './suboptimal-kernels';
 
@@ -46,15 +47,20 @@ export interface TruthVersusFilterHistory {
 export function runTruthVersusFilter(
   truth: ErrorModel, filter: ErrorModel, truthMap: Float64Array, traj: NominalTrajectory, options: { contributions?: boolean } = {},
 ): TruthVersusFilterHistory {
-  const nt = truth.states.length, nf = filter.states.length, na = nt + nf;
+  const nt = truth.states.length, nf = filter.states.length;
+  const truthSchedule = scheduleMeasurements(truth, traj), filterSchedule = scheduleMeasurements(filter, traj);
+  const sparseMap = sparseTruthMap(truthMap, nt, nf), gScratch = new Float64Array(nt + nf);
+  const pairs = truthSchedule.map((list, k) => list.map((mt, i) => measurementPair(mt, filterSchedule[k][i], sparseMap, gScratch)));
+  const carried = carriedStates(truth, filter, truthMap, couplingIndices(pairs));
+  const nx = carried.index.length, na = nx + nf;
+  for (const list of pairs) for (const p of list) carryPair(p, carried.position, nt, nx);
   const plan = planSourceStorage(truth, options.contributions !== false);
-  const layout: RunLayout = { nt, nf, plan, truth, filter };
+  const layout: RunLayout = { nt, nf, carried, plan, truth, filter };
   const steps = traj.tS.length;
   const st = initialiseAugmented(layout, truthMap);
   const hist = allocateHistory(layout, steps);
-  const truthSchedule = scheduleMeasurements(truth, traj), filterSchedule = scheduleMeasurements(filter, traj);
   const truthCache = new DiscretisationCache(truth, traj), filterCache = new DiscretisationCache(filter, traj);
-  const augmented = new AugmentedSteps(nt, nf, truthMap);
+  const augmented = new AugmentedSteps(nt, nf, truthMap, carried);
   const innovations = new Map<string, InnovationRatios>();
   const issues: CovarianceIssue[] = [];
   const scratch = new Float64Array(na * na), uF = new Float64Array(nf), uA = new Float64Array(na), gain = new Float64Array(nf);
@@ -76,8 +82,8 @@ export function runTruthVersusFilter(
         propagateVectors(st.vecs, plan.vectors, a.phi, scratch);
       });
     }
-    truthSchedule[k].forEach((mt, i) => {
-      const pair = measurementPair(mt, filterSchedule[k][i], truthMap, nt, nf);
+    pairs[k].forEach((pair) => {
+      const mt = pair.truth;
       const ratio = update(layout, st, pair, { uF, uA, gain });
       if (ratio === undefined) {
         noteIssue(issues, { kind: 'singular-innovation', tS: traj.tS[k], detail: `${mt.key}: the filter's innovation variance is not positive` });
@@ -112,15 +118,15 @@ function update(
   layout: RunLayout, st: AugmentedState, m: MeasurementPair,
   w: { uF: Float64Array; uA: Float64Array; gain: Float64Array },
 ): number | undefined {
-  const { nt, nf, plan } = layout;
-  const na = nt + nf, nn = na * na;
+  const { nf, plan } = layout;
+  const nx = layout.carried.index.length, na = nx + nf, nn = na * na;
   const hph = multiplySparseVector(st.filterP, 0, nf, m.filter.hIdx, m.filter.hVal, w.uF);
   const predicted = hph + m.filter.rTotal;
   if (!(predicted > 0) || !Number.isFinite(predicted)) return undefined;
   for (let i = 0; i < nf; i++) w.gain[i] = w.uF[i] / predicted;
   josephUpdateInPlace(st.filterP, 0, nf, w.gain, w.uF, hph, m.filter.rTotal);
   const gcg = multiplySparseVector(st.mats, 0, na, m.gIdx, m.gVal, w.uA);
-  josephUpdateErrorBlock(st.mats, 0, nt, nf, w.gain, w.uA, gcg + m.truth.rTotal);
+  josephUpdateErrorBlock(st.mats, 0, nx, nf, w.gain, w.uA, gcg + m.truth.rTotal);
   st.rOfSlot.fill(0);
   for (let p = 0; p < m.truth.rSources.length; p++) {
     const slot = plan.denseSlot[m.truth.rSources[p]];
@@ -128,9 +134,9 @@ function update(
   }
   for (let slot = 1; slot < plan.denseCount; slot++) {
     const g = multiplySparseVector(st.mats, slot * nn, na, m.gIdx, m.gVal, w.uA);
-    josephUpdateErrorBlock(st.mats, slot * nn, nt, nf, w.gain, w.uA, g + st.rOfSlot[slot]);
+    josephUpdateErrorBlock(st.mats, slot * nn, nx, nf, w.gain, w.uA, g + st.rOfSlot[slot]);
   }
-  updateErrorVectors(st.vecs, plan.vectors, nt, nf, m.gIdx, m.gVal, w.gain);
+  updateErrorVectors(st.vecs, plan.vectors, nx, nf, m.gIdx, m.gVal, w.gain);
   return (gcg + m.truth.rTotal) / predicted;
 }
 

@@ -1,6 +1,7 @@
 /**
  * Allocation-free loops of the suboptimal-filter recursion over the
- * augmented covariance C of z = [x; e] (n_a = n_t + n_f, row-major).
+ * augmented covariance C of z = [x; e] (n_a = n_x + n_f, row-major; x holds
+ * the carried truth states).
  */
 
 /**
@@ -12,14 +13,14 @@
  * @param gain K over the filter's n_f states.
  */
 export function josephUpdateErrorBlock(
-  c: Float64Array, offset: number, nt: number, nf: number, gain: Float64Array, u: Float64Array, cScalar: number,
+  c: Float64Array, offset: number, nx: number, nf: number, gain: Float64Array, u: Float64Array, cScalar: number,
 ): void {
-  const na = nt + nf;
+  const na = nx + nf;
   for (let i = 0; i < na; i++) {
-    const ki = i < nt ? 0 : gain[i - nt], ui = u[i];
+    const ki = i < nx ? 0 : gain[i - nx], ui = u[i];
     const row = offset + i * na;
-    for (let j = Math.max(i, nt); j < na; j++) {
-      const kj = gain[j - nt];
+    for (let j = Math.max(i, nx); j < na; j++) {
+      const kj = gain[j - nx];
       const v = c[row + j] - ki * u[j] - ui * kj + cScalar * ki * kj;
       c[row + j] = v;
       c[offset + j * na + i] = v;
@@ -27,14 +28,14 @@ export function josephUpdateErrorBlock(
   }
 }
 
-/** ψ <- (I − K_a gᵀ) ψ for `count` augmented vectors (a rank-one source share with no R of its own). */
-export function updateErrorVectors(v: Float64Array, count: number, nt: number, nf: number, gIdx: Int32Array, gVal: Float64Array, gain: Float64Array): void {
-  const na = nt + nf;
-  for (let c = 0; c < count; c++) {
+/** ψ <- (I − K_a gᵀ) ψ for `counx` augmenxed vectors (a rank-one source share with no R of its own). */
+export function updateErrorVectors(v: Float64Array, counx: number, nx: number, nf: number, gIdx: Int32Array, gVal: Float64Array, gain: Float64Array): void {
+  const na = nx + nf;
+  for (let c = 0; c < counx; c++) {
     const off = c * na;
     let gv = 0;
     for (let p = 0; p < gIdx.length; p++) gv += gVal[p] * v[off + gIdx[p]];
     if (gv === 0) continue;
-    for (let i = 0; i < nf; i++) v[off + nt + i] -= gain[i] * gv;
+    for (let i = 0; i < nf; i++) v[off + nx + i] -= gain[i] * gv;
   }
 }
