@@ -5,6 +5,8 @@ import { checkCommand, EXIT, runCommand, sizeCommand, type Io } from './commands
 import { ALLAN_CLI_OPTIONS, allanCommand, allanOptionsFromArgs } from './allan-command';
 import { CALIBRATE_CLI_OPTIONS, calibrateCommand, calibrateOptionsFromArgs } from './calibrate-command';
 import { INTO_CLI_OPTIONS } from './write-into-budget';
+import { SENSITIVITY_CLI_OPTIONS, sensitivityCommand } from './sensitivity-command';
+import { rSweepCommand } from './r-sweep-command';
 
 const USAGE = `sigma-ledger: sensor error budgets by covariance analysis
 
@@ -28,6 +30,16 @@ usage:
       with --into BUDGET --sensor ID their uncertainties go into the sensor's
       turn-on-bias and scale-factor rows
 
+  sigma-ledger sensitivity FILE [--rows SENSOR.ROW,...] [--range LOW,HIGH] [--json]
+      every value marked assumed (and the rows given) scaled from x0.5 to x2 (or
+      the range given): the change in each requirement's worst value, ranked
+  sigma-ledger r-sweep FILE --sensor ID [--json]
+      the sensor's R in the filter scaled from x0.1 to x10: each requirement's
+      actual and believed worst value (rows with "tuning" keep their design)
+
+With rows that carry a filter design ("tuning"), run also reports what the
+filter believes against its actual error, and its verdicts are the actual error's.
+
 exit codes: 0 every requirement holds, 1 some requirement fails, 2 bad input
 
 ${CAUTION}
@@ -44,6 +56,7 @@ const OPTIONS = {
   ...ALLAN_CLI_OPTIONS,
   ...CALIBRATE_CLI_OPTIONS,
   ...INTO_CLI_OPTIONS,
+  ...SENSITIVITY_CLI_OPTIONS,
 } as const;
 
 /** Runs the command line; returns the exit code. Messages for bad input go to `io.err`, never as a stack trace. */
@@ -73,8 +86,12 @@ export async function main(argv: string[], io: Io = processIo()): Promise<number
         return await allanCommand(allanOptionsFromArgs(file, values), io);
       case 'calibrate':
         return await calibrateCommand(calibrateOptionsFromArgs(file, values), io);
+      case 'sensitivity':
+        return sensitivityCommand(file, values, io);
+      case 'r-sweep':
+        return rSweepCommand(file, values, io);
       default:
-        return usageError(io, `unknown command "${command}"; use run, size, check, allan or calibrate`);
+        return usageError(io, `unknown command "${command}"; use run, size, check, allan, calibrate, sensitivity or r-sweep`);
     }
   } catch (e) {
     if (e instanceof SigmaLedgerError) {
