@@ -24,3 +24,17 @@ describe('the filter as tuned versus truth', () => {
     expect(shadow(el).querySelector('h2')).to.equal(null);
   });
 });
+
+describe('the σ plots with a filter design', () => {
+  it('draw the believed (dotted) and the actual heading σ beside the optimal one, from the view\'s series', async () => {
+    const { sigmaDatasets } = await import('../../../web/charts/sigma-series');
+    const view = exampleView(ANNOTATED);
+    const sets = sigmaDatasets(view, 'heading');
+    const believed = sets.find((d) => d.label === 'heading 1σ, believed by the filter as tuned')!;
+    const actual = sets.find((d) => d.label === 'heading 1σ, actual with the filter as tuned')!;
+    expect(believed.data).to.deep.equal(view.result!.filterDesign!.believed.series.heading_sigma_deg);
+    expect(actual.data).to.deep.equal(view.result!.filterDesign!.actual.series.heading_sigma_deg);
+    expect(believed.borderDash.length).to.equal(2);
+    expect(sets.filter((d) => d.label.includes('filter as tuned')).length).to.equal(2);
+  });
+});
