@@ -13,7 +13,7 @@ describe('the page view of a budget with a filter design', () => {
     expect(fd.actual.series.t_s).toEqual(fd.believed.series.t_s);
     expect(fd.confidence.map((c) => c.quantity)).toContain('heading');
     expect(Object.keys(fd.actual.contributions.heading)).toContain('gnss.multipath');
-  }, 30_000);
+  }, 60_000);
 
   it('gives the quick first answer without shares, and nothing for a budget without tuning', () => {
     const quick = computeView(document, { contributions: false }).result!.filterDesign!;
@@ -21,5 +21,5 @@ describe('the page view of a budget with a filter design', () => {
     const plain = structuredClone(document);
     for (const s of plain.sensors) for (const r of s.sources) delete r.tuning;
     expect(computeView(plain).result!.filterDesign).toBeUndefined();
-  }, 30_000);
+  }, 60_000);
 });
