@@ -7,6 +7,8 @@ import { CALIBRATE_CLI_OPTIONS, calibrateCommand, calibrateOptionsFromArgs } fro
 import { INTO_CLI_OPTIONS } from './write-into-budget';
 import { SENSITIVITY_CLI_OPTIONS, sensitivityCommand } from './sensitivity-command';
 import { rSweepCommand } from './r-sweep-command';
+import { SIMULATE_CLI_OPTIONS, simulateCommand, simulateOptionsFromArgs } from './simulate-command';
+import { mergeCommand } from './merge-command';
 
 const USAGE = `sigma-ledger: sensor error budgets by covariance analysis
 
@@ -36,6 +38,15 @@ usage:
   sigma-ledger r-sweep FILE --sensor ID [--json]
       the sensor's R in the filter scaled from x0.1 to x10: each requirement's
       actual and believed worst value (rows with "tuning" keep their design)
+  sigma-ledger simulate FILE --runs N [--seed S] [--workers W] [--json] [--every K] [--output OUT]
+      Monte Carlo check of the linearised budget: RMS error beside the predicted
+      sigma with its 95 % band, average NEES with its 95 % bounds, and where the
+      covariance is optimistic; parallel over the machine's cores; exit 1 with warnings
+  sigma-ledger simulate FILE --runs N [--seed S] --shard I/N|auto/N [--output PART]
+      only shard I of N (0-based; auto reads JOB_COMPLETION_INDEX or
+      SLURM_ARRAY_TASK_ID) and write a part file
+  sigma-ledger merge PARTS... [--json] [--every K] [--output OUT]
+      combine the parts into exactly the one-machine result
 
 With rows that carry a filter design ("tuning"), run also reports what the
 filter believes against its actual error, and its verdicts are the actual error's.
@@ -57,6 +68,7 @@ const OPTIONS = {
   ...CALIBRATE_CLI_OPTIONS,
   ...INTO_CLI_OPTIONS,
   ...SENSITIVITY_CLI_OPTIONS,
+  ...SIMULATE_CLI_OPTIONS,
 } as const;
 
 /** Runs the command line; returns the exit code. Messages for bad input go to `io.err`, never as a stack trace. */
@@ -73,6 +85,7 @@ export async function main(argv: string[], io: Io = processIo()): Promise<number
       return EXIT.badInput;
     }
     if (!file) return usageError(io, `"${command}" needs a file`);
+    if (command === 'merge') return await mergeCommand([file, ...extra], { json: values.json, every: positiveNumber(values.every, '--every', 1), output: values.output }, io);
     if (extra.length) return usageError(io, `unexpected argument "${extra[0]}"`);
     switch (command) {
       case 'run':
@@ -90,8 +103,10 @@ export async function main(argv: string[], io: Io = processIo()): Promise<number
         return sensitivityCommand(file, values, io);
       case 'r-sweep':
         return rSweepCommand(file, values, io);
+      case 'simulate':
+        return await simulateCommand(simulateOptionsFromArgs(file, values, process.env), io);
       default:
-        return usageError(io, `unknown command "${command}"; use run, size, check, allan, calibrate, sensitivity or r-sweep`);
+        return usageError(io, `unknown command "${command}"; use run, size, check, allan, calibrate, simulate, merge, sensitivity or r-sweep`);
     }
   } catch (e) {
     if (e instanceof SigmaLedgerError) {

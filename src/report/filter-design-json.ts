@@ -6,7 +6,7 @@
 import type { ErrorModel } from '../covariance/error-model';
 import type { BudgetInput, TuningInput } from '../inputs/budget-input';
 import type { FilterDesignResult } from '../suboptimal/compute-filter-design';
-import { CONTRIBUTION_KEYS, keptSteps, requirementEntry, sigmaSeries, varianceShares, type RequirementEntry } from './json-result';
+import { resultKeys, keptSteps, requirementEntry, sigmaSeries, varianceShares, type RequirementEntry } from './json-result';
 
 /** Believed or actual series: the same keys as the top-level `series` (sigma in display units). */
 export interface FilterViewJson {
@@ -47,7 +47,7 @@ export function buildFilterDesignJson(design: FilterDesignResult, truth: ErrorMo
       contributions: varianceShares(design.actual.series, truth, keep),
     },
     confidence: design.confidence.map((c) => ({
-      quantity: CONTRIBUTION_KEYS[c.quantity], unit: c.unit, verdict: c.verdict,
+      quantity: resultKeys(c.quantity).contributions, unit: c.unit, verdict: c.verdict,
       end: pair(c.atEnd), mostOverconfident: pair(c.mostOverconfident), mostConservative: pair(c.mostConservative),
     })),
     innovations: design.innovations.map((r) => ({ sensor: r.sensorId, mean: r.mean, max: r.max, count: r.ratio.length, t_s: r.tS, ratio: r.ratio })),

@@ -1,6 +1,7 @@
 import type { BudgetResult } from '../pipeline';
-import type { BudgetSeries, VarianceQuantity } from '../budget/budget-series';
+import type { BudgetSeries } from '../budget/budget-series';
 import type { ErrorModel } from '../covariance/error-model';
+import { quantitySpec, VARIANCE_QUANTITIES, type VarianceQuantity } from '../inputs/quantities';
 import { CAUTION } from './caution';
 import { confidenceFactor1D } from '../budget/confidence';
 import { DISPLAY, varianceFactor } from './display-units';
@@ -8,16 +9,8 @@ import { traceNoise, type NoiseTrace } from './noise-trace';
 import type { RequirementResult } from '../budget/requirements';
 import type { FilterDesignJson } from './filter-design-json';
 
-/** Keys of the per-step series in the JSON result, with the variance quantity each reads. */
-export const SERIES_KEYS: [string, VarianceQuantity][] = [
-  ['heading_sigma_deg', 'heading'], ['speed_sigma_mps', 'speed'], ['north_sigma_m', 'north'], ['east_sigma_m', 'east'],
-  ['drms_m', 'drms'], ['along_sigma_m', 'along-track'], ['cross_sigma_m', 'cross-track'],
-];
-
-/** Short names of the quantities under `contributions`. */
-export const CONTRIBUTION_KEYS: Record<VarianceQuantity, string> = {
-  heading: 'heading', speed: 'speed', north: 'north', east: 'east', drms: 'drms', 'along-track': 'along', 'cross-track': 'cross',
-};
+/** Keys of the per-step series and of the contributions in the JSON result, from the quantity table. */
+export const resultKeys = (q: VarianceQuantity) => ({ series: quantitySpec(q).seriesKey!, contributions: quantitySpec(q).resultKey! });
 
 /** How long one requirement holds after an aiding sensor's outage begins (times in s from the mission start). */
 export interface OutageHoldEntry {
@@ -111,7 +104,7 @@ export function buildJsonResult(result: BudgetResult, title: string, every = 1):
         const toDisplay = Math.sqrt(varianceFactor(qb.quantity));
         const atLevel = toDisplay * (qb.quantity === 'drms' ? 1 : confidenceFactor1D(result.reportLevel));
         return {
-          quantity: CONTRIBUTION_KEYS[qb.quantity], unit: DISPLAY[qb.quantity].unit,
+          quantity: resultKeys(qb.quantity).contributions, unit: DISPLAY[qb.quantity].unit,
           sigma: toDisplay * qb.totalSigmaSI, atLevel: atLevel * qb.totalSigmaSI,
           sources: qb.shares.map((s) => ({ id: s.sourceId, sigma: toDisplay * s.sigmaSI, atLevel: atLevel * s.sigmaSI, share: s.fraction })),
         };
@@ -125,11 +118,11 @@ export function buildJsonResult(result: BudgetResult, title: string, every = 1):
 /** The sigma series (display units) at the kept steps, with CEP and R95 where there is position. Throws nothing. */
 export function sigmaSeries(series: BudgetSeries, keep: number[]): Record<string, number[]> {
   const out: Record<string, number[]> = { t_s: keep.map((k) => series.tS[k]) };
-  for (const [key, q] of SERIES_KEYS) {
+  for (const q of VARIANCE_QUANTITIES) {
     const s = series.quantities[q];
     if (!s) continue;
     const f = varianceFactor(q);
-    out[key] = keep.map((k) => Math.sqrt(Math.max(0, s.total[k] * f)));
+    out[resultKeys(q).series] = keep.map((k) => Math.sqrt(Math.max(0, s.total[k] * f)));
   }
   if (series.quantities.drms) {
     out.cep_m = keep.map((k) => series.cepM[k]);
@@ -141,11 +134,11 @@ export function sigmaSeries(series: BudgetSeries, keep: number[]): Record<string
 /** Each source's share of each variance (display units²) at the kept steps, by the model's source ids. Throws nothing. */
 export function varianceShares(series: BudgetSeries, model: ErrorModel, keep: number[]): Record<string, Record<string, number[]>> {
   const out: Record<string, Record<string, number[]>> = {};
-  for (const [, q] of SERIES_KEYS) {
+  for (const q of VARIANCE_QUANTITIES) {
     const s = series.quantities[q];
     if (!s) continue;
     const f = varianceFactor(q);
-    out[CONTRIBUTION_KEYS[q]] = Object.fromEntries(s.bySource.map((b, i) => [model.sources[i].id, keep.map((k) => b[k] * f)]));
+    out[resultKeys(q).contributions] = Object.fromEntries(s.bySource.map((b, i) => [model.sources[i].id, keep.map((k) => b[k] * f)]));
   }
   return out;
 }
