@@ -9,6 +9,7 @@ import { formatSummary } from '../report/text-summary';
 import { buildJsonResult } from '../report/json-result';
 import { formatSignificant } from '../units';
 import { loadBudget, sheetProblems, withDocumentPaths, type LoadedBudget } from './load-budget';
+import { filterDesignReport } from './filter-design-report';
 
 /** Exit codes: every requirement holds, some requirement fails, bad input. */
 export const EXIT = { pass: 0, fail: 1, badInput: 2 } as const;
@@ -52,19 +53,22 @@ export function runCommand(file: string, opts: RunOptions, io: Io): number {
   const problems = reportProblems(loaded, io);
   if (loaded.sheet.blocked) return EXIT.badInput;
   const started = Date.now();
-  const result = withDocumentPaths(loaded, (input) => {
+  const { result, design } = withDocumentPaths(loaded, (input) => {
     announceLongRun(input, io);
-    return computeBudget(input);
+    const result = computeBudget(input);
+    return { result, design: filterDesignReport(input, result) };
   });
   if (Date.now() - started > 2000) io.err(`computed ${result.trajectory.tS.length} steps in ${((Date.now() - started) / 1000).toFixed(1)} s\n`);
   const title = loaded.document.title + (problems ? ' (PARTIAL: cells with errors were left out)' : '');
   const text = opts.json
-    ? JSON.stringify(buildJsonResult(result, title, opts.every)) + '\n'
-    : formatSummary(result, { title, fileName: file });
+    ? JSON.stringify({ ...buildJsonResult(result, title, opts.every), ...(design && { filterDesign: design.json(opts.every) }) }) + '\n'
+    : formatSummary(result, { title, fileName: file }) + (design ? `\n${design.text()}` : '');
   if (opts.output) writeOutput(opts.output, text);
   else io.out(text);
   if (problems) return EXIT.badInput;
-  return result.requirements.every((r) => r.verdict === 'pass') ? EXIT.pass : EXIT.fail;
+  // With a filter design the verdict is the actual error's, not the optimal filter's.
+  const holds = design ? design.holds : result.requirements.every((r) => r.verdict === 'pass');
+  return holds ? EXIT.pass : EXIT.fail;
 }
 
 /** `size FILE --requirement ID --vary ROW`: the largest allowable value of one row. */

@@ -5,6 +5,8 @@ import { checkCommand, EXIT, runCommand, sizeCommand, type Io } from './commands
 import { ALLAN_CLI_OPTIONS, allanCommand, allanOptionsFromArgs } from './allan-command';
 import { CALIBRATE_CLI_OPTIONS, calibrateCommand, calibrateOptionsFromArgs } from './calibrate-command';
 import { INTO_CLI_OPTIONS } from './write-into-budget';
+import { SENSITIVITY_CLI_OPTIONS, sensitivityCommand } from './sensitivity-command';
+import { rSweepCommand } from './r-sweep-command';
 import { SIMULATE_CLI_OPTIONS, simulateCommand, simulateOptionsFromArgs } from './simulate-command';
 import { mergeCommand } from './merge-command';
 
@@ -30,6 +32,12 @@ usage:
       with --into BUDGET --sensor ID their uncertainties go into the sensor's
       turn-on-bias and scale-factor rows
 
+  sigma-ledger sensitivity FILE [--rows SENSOR.ROW,...] [--range LOW,HIGH] [--json]
+      every value marked assumed (and the rows given) scaled from x0.5 to x2 (or
+      the range given): the change in each requirement's worst value, ranked
+  sigma-ledger r-sweep FILE --sensor ID [--json]
+      the sensor's R in the filter scaled from x0.1 to x10: each requirement's
+      actual and believed worst value (rows with "tuning" keep their design)
   sigma-ledger simulate FILE --runs N [--seed S] [--workers W] [--json] [--every K] [--output OUT]
       Monte Carlo check of the linearised budget: RMS error beside the predicted
       sigma with its 95 % band, average NEES with its 95 % bounds, and where the
@@ -39,6 +47,9 @@ usage:
       SLURM_ARRAY_TASK_ID) and write a part file
   sigma-ledger merge PARTS... [--json] [--every K] [--output OUT]
       combine the parts into exactly the one-machine result
+
+With rows that carry a filter design ("tuning"), run also reports what the
+filter believes against its actual error, and its verdicts are the actual error's.
 
 exit codes: 0 every requirement holds, 1 some requirement fails, 2 bad input
 
@@ -56,6 +67,7 @@ const OPTIONS = {
   ...ALLAN_CLI_OPTIONS,
   ...CALIBRATE_CLI_OPTIONS,
   ...INTO_CLI_OPTIONS,
+  ...SENSITIVITY_CLI_OPTIONS,
   ...SIMULATE_CLI_OPTIONS,
 } as const;
 
@@ -87,10 +99,14 @@ export async function main(argv: string[], io: Io = processIo()): Promise<number
         return await allanCommand(allanOptionsFromArgs(file, values), io);
       case 'calibrate':
         return await calibrateCommand(calibrateOptionsFromArgs(file, values), io);
+      case 'sensitivity':
+        return sensitivityCommand(file, values, io);
+      case 'r-sweep':
+        return rSweepCommand(file, values, io);
       case 'simulate':
         return await simulateCommand(simulateOptionsFromArgs(file, values, process.env), io);
       default:
-        return usageError(io, `unknown command "${command}"; use run, size, check, allan, calibrate, simulate or merge`);
+        return usageError(io, `unknown command "${command}"; use run, size, check, allan, calibrate, simulate, merge, sensitivity or r-sweep`);
     }
   } catch (e) {
     if (e instanceof SigmaLedgerError) {

@@ -138,6 +138,11 @@ export interface ErrorModel {
   dynamics(speedMps: number, turnRateRadps: number): Float64Array;
   /** True when the suite has a speed input (speed outputs exist). */
   hasSpeedInput: boolean;
+  /**
+   * The builder's key of each state (`gyro#bias`, `gyro.bi#gm`), indexed like
+   * `states`: two models of one suite (truth and filter) match states by key.
+   */
+  stateKeys?: string[];
   /** Output rates of the yaw gyro and the speed sensor, Hz (0 when absent; aiding sensors carry theirs in `streams`). */
   deadReckoningRateHz: { gyro: number; speed: number };
   /** SI unit of what each measurement measures, by noise key (`gnss.north` -> `m`), as the sensor kinds declare it. */

@@ -95,8 +95,11 @@ export class ModelBuilder {
   build(): ErrorModel {
     const n = this.states.length;
     const terms = this.terms.slice();
+    const keys: string[] = [];
+    for (const [key, index] of this.stateKeys) keys[index] = key;
     return {
       states: this.states.slice(),
+      stateKeys: keys,
       core: { ...this.core },
       channels: this.channels.slice(),
       sources: this.sources.slice(),

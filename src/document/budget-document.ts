@@ -71,6 +71,31 @@ export interface OutageEntry {
   note?: string;
 }
 
+/**
+ * How the filter is tuned for one row when its design differs from the truth
+ * (the row itself stays the truth). Every field is optional; a row without
+ * `tuning` is modelled by the filter exactly as written.
+ */
+export interface RowTuning {
+  /** The magnitude the filter is tuned with, in any unit of the row's kind; a formula is allowed. */
+  value?: QuantityCell;
+  /** The correlation time the filter assumes (bias instability, multipath as states). */
+  correlationTime?: QuantityCell;
+  /** Filter-only factor (> 0) on every variance and PSD the row gives the filter (P0, Q and R). */
+  inflation?: number;
+  /** True: the filter leaves the row out altogether. */
+  leftOut?: boolean;
+  /**
+   * A state the filter does not carry as the truth has it: bias instability
+   * modelled as a random walk, or multipath folded into R (or carried as states).
+   */
+  model?: TuningModel;
+  note?: string;
+}
+
+/** How the filter models a row whose truth is a Gauss-Markov state (or folded noise). */
+export type TuningModel = 'random-walk' | 'gauss-markov' | 'folded' | 'states';
+
 /** One row: one error source. The row's own `value` and `unit` are its magnitude. */
 export interface SourceRow extends QuantityCell {
   id: string;
@@ -84,6 +109,8 @@ export interface SourceRow extends QuantityCell {
   component?: 'range' | 'bearing';
   provenance: string;
   assumed: boolean;
+  /** The filter's design for this row, when it differs from the truth. */
+  tuning?: RowTuning;
   note?: string;
 }
 

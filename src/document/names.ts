@@ -6,14 +6,18 @@
  * The scheme (every name is case-insensitive, as in spreadsheets):
  * - a named value is its key in `values`: `cruiseSpeed`;
  * - a row's magnitude is its full id: `gyro.arw`;
- * - a row's other cells add the field: `gyro.bi.correlationTime`, `gyro.lsb.rate`;
+ * - a row's other cells add the field: `gyro.bi.correlationTime`, `gyro.lsb.rate`,
+ *   and the filter's tuned values `gyro.bi.tuning.value`, `gyro.bi.tuning.correlationTime`;
  * - the start-pose sources are `mission.initialPosition` and `mission.initialHeading`.
  * Named values have no dots and sensor ids cannot be "mission", so these
  * never collide. Other cells (segments, requirements, ...) have no names.
  */
 
+/** A row's cells that formulas can name; `tuning.*` are the filter's values (`gyro.bi.tuning.value`). */
+export type RowCellField = 'value' | 'correlationTime' | 'rate' | 'tuning.value' | 'tuning.correlationTime';
+
 /** Name of a row cell: its full id for the magnitude, plus the field for the others. */
-export function rowCellName(sensorId: string, rowId: string, field: 'value' | 'correlationTime' | 'rate'): string {
+export function rowCellName(sensorId: string, rowId: string, field: RowCellField): string {
   return field === 'value' ? `${sensorId}.${rowId}` : `${sensorId}.${rowId}.${field}`;
 }
 

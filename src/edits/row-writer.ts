@@ -78,6 +78,8 @@ function overwrite(doc: BudgetDocument, sensorIndex: number, rowIndex: number, p
   const sensor = doc.sensors[sensorIndex];
   const old = sensor.sources[rowIndex];
   const row: SourceRow = { id: old.id, kind: plan.kind, ...copyOf(plan.fields) };
+  // A log measures the truth; the filter's own design of the row stays as the user wrote it.
+  if (old.tuning && old.kind === plan.kind) row.tuning = old.tuning;
   for (const field of ['value', 'correlationTime', 'rate'] as const) {
     const before = field === 'value' ? old : old[field];
     const after = field === 'value' ? row : row[field];

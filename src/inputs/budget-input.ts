@@ -62,6 +62,17 @@ export interface SourceKindMap {}
 /** Kinds of error source a row can hold (the names of {@link SourceKindMap}). */
 export type SourceKind = keyof SourceKindMap & string;
 
+/** The filter's design of one row, evaluated (see the document's `tuning`); the row itself is the truth. */
+export interface TuningInput {
+  value?: Quantity;
+  correlationTime?: Quantity;
+  /** Factor (> 0) on every variance and PSD the row gives the filter. */
+  inflation?: number;
+  leftOut?: boolean;
+  /** Bias instability: 'random-walk' or 'gauss-markov'; multipath: 'folded' or 'states'. */
+  model?: 'random-walk' | 'gauss-markov' | 'folded' | 'states';
+}
+
 /** One grid row: one error source of one sensor. */
 export interface SourceInput {
   /** Unique in its sensor; the full id is `sensorId.rowId`. */
@@ -87,6 +98,8 @@ export interface SourceInput {
   provenance?: string;
   /** True when nobody measured it or read it from a datasheet. */
   assumed?: boolean;
+  /** How the filter is tuned for this row when that differs from the truth; absent: as the row. */
+  tuning?: TuningInput;
 }
 
 /**

@@ -1,12 +1,16 @@
 import type { BudgetResult } from '../pipeline';
+import type { BudgetSeries } from '../budget/budget-series';
+import type { ErrorModel } from '../covariance/error-model';
 import { quantitySpec, VARIANCE_QUANTITIES, type VarianceQuantity } from '../inputs/quantities';
 import { CAUTION } from './caution';
 import { confidenceFactor1D } from '../budget/confidence';
 import { DISPLAY, varianceFactor } from './display-units';
 import { traceNoise, type NoiseTrace } from './noise-trace';
+import type { RequirementResult } from '../budget/requirements';
+import type { FilterDesignJson } from './filter-design-json';
 
 /** Keys of the per-step series and of the contributions in the JSON result, from the quantity table. */
-const resultKeys = (q: VarianceQuantity) => ({ series: quantitySpec(q).seriesKey!, contributions: quantitySpec(q).resultKey! });
+export const resultKeys = (q: VarianceQuantity) => ({ series: quantitySpec(q).seriesKey!, contributions: quantitySpec(q).resultKey! });
 
 /** How long one requirement holds after an aiding sensor's outage begins (times in s from the mission start). */
 export interface OutageHoldEntry {
@@ -67,6 +71,8 @@ export interface JsonResult {
   checkpoints: CheckpointEntry[];
   noise: NoiseTrace;
   status: { healthy: boolean; issues: BudgetResult['history']['issues'] };
+  /** Present when rows carry a filter design (`tuning`): see filter-design-json.ts. */
+  filterDesign?: FilterDesignJson;
 }
 
 /**
@@ -77,20 +83,9 @@ export interface JsonResult {
  */
 export function buildJsonResult(result: BudgetResult, title: string, every = 1): JsonResult {
   const keep = keptSteps(result.series.tS.length, every);
-  const pick = (a: ArrayLike<number>, f = (x: number) => x) => keep.map((k) => f(a[k]));
-  const series: Record<string, number[]> = { t_s: pick(result.series.tS) };
-  const contributions: Record<string, Record<string, number[]>> = {};
-  for (const q of VARIANCE_QUANTITIES) {
-    const s = result.series.quantities[q];
-    if (!s) continue;
-    const f = varianceFactor(q);
-    series[resultKeys(q).series] = pick(s.total, (v) => Math.sqrt(Math.max(0, v * f)));
-    contributions[resultKeys(q).contributions] = Object.fromEntries(s.bySource.map((b, i) => [result.model.sources[i].id, pick(b, (v) => v * f)]));
-  }
-  if (result.series.quantities.drms) {
-    series.cep_m = pick(result.series.cepM);
-    series.r95_m = pick(result.series.r95M);
-  }
+  const pick = (a: ArrayLike<number>) => keep.map((k) => a[k]);
+  const series = sigmaSeries(result.series, keep);
+  const contributions = varianceShares(result.series, result.model, keep);
   return {
     format: 'sigma-ledger-result', formatVersion: 1, title, caution: CAUTION,
     mission: {
@@ -102,11 +97,7 @@ export function buildJsonResult(result: BudgetResult, title: string, every = 1):
     calibration: result.history.calibrationStates.map((i, c) => ({
       state: result.model.states[i].name, unit: result.model.states[i].unitSI, sigma: pick(result.history.calibrationSigma[c]),
     })),
-    requirements: result.requirements.map((r) => ({
-      id: r.id, quantity: r.quantity, level: r.level, limit: r.limit.value, unit: r.limit.unit, verdict: r.verdict, margin: r.margin,
-      worst: r.worstValue, worst_t_s: r.worstTimeS, window_s: [r.windowStartS, r.windowEndS],
-      outages: r.outages.map((o) => ({ sensor: o.sensorId, outage: o.outageId, start_s: o.startS, end_s: o.endS, timeToExceed_s: o.timeToExceedS })),
-    })),
+    requirements: result.requirements.map(requirementEntry),
     checkpoints: result.checkpoints.map((c) => ({
       id: c.id, t_s: c.tS, level: result.reportLevel,
       budgets: c.quantities.map((qb) => {
@@ -121,6 +112,43 @@ export function buildJsonResult(result: BudgetResult, title: string, every = 1):
     })),
     noise: traceNoise(result.model),
     status: { healthy: result.history.issues.length === 0, issues: result.history.issues },
+  };
+}
+
+/** The sigma series (display units) at the kept steps, with CEP and R95 where there is position. Throws nothing. */
+export function sigmaSeries(series: BudgetSeries, keep: number[]): Record<string, number[]> {
+  const out: Record<string, number[]> = { t_s: keep.map((k) => series.tS[k]) };
+  for (const q of VARIANCE_QUANTITIES) {
+    const s = series.quantities[q];
+    if (!s) continue;
+    const f = varianceFactor(q);
+    out[resultKeys(q).series] = keep.map((k) => Math.sqrt(Math.max(0, s.total[k] * f)));
+  }
+  if (series.quantities.drms) {
+    out.cep_m = keep.map((k) => series.cepM[k]);
+    out.r95_m = keep.map((k) => series.r95M[k]);
+  }
+  return out;
+}
+
+/** Each source's share of each variance (display units²) at the kept steps, by the model's source ids. Throws nothing. */
+export function varianceShares(series: BudgetSeries, model: ErrorModel, keep: number[]): Record<string, Record<string, number[]>> {
+  const out: Record<string, Record<string, number[]>> = {};
+  for (const q of VARIANCE_QUANTITIES) {
+    const s = series.quantities[q];
+    if (!s) continue;
+    const f = varianceFactor(q);
+    out[resultKeys(q).contributions] = Object.fromEntries(s.bySource.map((b, i) => [model.sources[i].id, keep.map((k) => b[k] * f)]));
+  }
+  return out;
+}
+
+/** One requirement's JSON entry. Throws nothing. */
+export function requirementEntry(r: RequirementResult): RequirementEntry {
+  return {
+    id: r.id, quantity: r.quantity, level: r.level, limit: r.limit.value, unit: r.limit.unit, verdict: r.verdict, margin: r.margin,
+    worst: r.worstValue, worst_t_s: r.worstTimeS, window_s: [r.windowStartS, r.windowEndS],
+    outages: r.outages.map((o) => ({ sensor: o.sensorId, outage: o.outageId, start_s: o.startS, end_s: o.endS, timeToExceed_s: o.timeToExceedS })),
   };
 }
 

@@ -9,6 +9,9 @@ import { levelSeries, limitDimension } from '../budget/levels';
 import { fromSI, toSI } from '../units';
 import { buildJsonResult, keptSteps, type JsonResult } from './json-result';
 import { CAUTION } from './caution';
+import { hasFilterDesign } from '../suboptimal/filter-rows';
+import { computeFilterDesign } from '../suboptimal/compute-filter-design';
+import { buildFilterDesignJson } from './filter-design-json';
 
 /** Most points a chart series gets; longer missions are thinned to every n-th step. */
 export const MAX_CHART_POINTS = 1500;
@@ -87,7 +90,12 @@ export function viewFromSheet(doc: BudgetDocument, sheet: SheetEvaluation, optio
       outages: r.model.streams.flatMap((s) => s.outages.map((o) => ({ sensorId: s.sensorId, id: o.id, startS: o.startS, endS: o.endS }))),
     };
     const pending = options.contributions === false;
-    return { ...base, result: buildJsonResult(r, doc.title, every), curves, plan, ...(pending && { contributionsPending: true }) };
+    const result = buildJsonResult(r, doc.title, every);
+    if (hasFilterDesign(sheet.input.sensors)) {
+      const design = computeFilterDesign(sheet.input, r, { contributions: options.contributions });
+      result.filterDesign = buildFilterDesignJson(design, r.model, sheet.input, every);
+    }
+    return { ...base, result, curves, plan, ...(pending && { contributionsPending: true }) };
   } catch (e) {
     if (!(e instanceof SigmaLedgerError)) throw e;
     const path = e.path ? documentPathOf(e.path, sheet.indexMap) : undefined;

@@ -3,8 +3,8 @@
  * range, field of view) fail is left out whole; otherwise only its failed
  * rows, outages and landmarks are.
  */
-import type { LandmarkEntry, OutageEntry, SensorEntry, SourceRow } from '../document/budget-document';
-import type { LandmarkInput, OutageInput, SensorInput, SourceInput } from '../inputs/budget-input';
+import type { LandmarkEntry, OutageEntry, RowTuning, SensorEntry, SourceRow } from '../document/budget-document';
+import type { LandmarkInput, OutageInput, SensorInput, SourceInput, TuningInput } from '../inputs/budget-input';
 import { keepBuilt, type OmittedItem, type QuantityReader } from './cell-reader';
 
 /** Per input sensor, the document index of each row, outage and landmark kept. */
@@ -21,9 +21,18 @@ const ROW_OPTIONS = ['biasForm', 'densitySides', 'quantum', 'multipathModel', 'c
 function buildRow(r: QuantityReader, row: SourceRow, path: string): SourceInput | undefined {
   const value = r.quantity(row, path);
   const times = r.fields(row, path, ['correlationTime', 'rate']);
-  if (value === undefined || times === undefined) return undefined;
+  const tuning = row.tuning && buildTuning(r, row.tuning, `${path}.tuning`);
+  if (value === undefined || times === undefined || tuning === null) return undefined;
   const options = ROW_OPTIONS.filter((k) => row[k] !== undefined).map((k) => [k, row[k]]);
-  return { id: row.id, kind: row.kind, value, ...times, ...Object.fromEntries(options) };
+  return { id: row.id, kind: row.kind, value, ...times, ...Object.fromEntries(options), ...(tuning && { tuning }) };
+}
+
+/** The filter's design of a row, or null when one of its cells failed (the row is then left out, truth and filter alike). */
+function buildTuning(r: QuantityReader, t: RowTuning, path: string): TuningInput | null {
+  const cells = r.fields(t, path, ['value', 'correlationTime']);
+  if (cells === undefined) return null;
+  const flags = (['inflation', 'leftOut', 'model'] as const).filter((k) => t[k] !== undefined).map((k) => [k, t[k]]);
+  return { ...cells, ...Object.fromEntries(flags) };
 }
 
 function buildOutage(r: QuantityReader, o: OutageEntry, path: string): OutageInput | undefined {

@@ -4,7 +4,7 @@
  * fixes one. The sheet places the cells in this order.
  */
 import type { BudgetDocument, QuantityCell, SensorEntry, SourceRow } from '../document/budget-document';
-import { INITIAL_POSE_NAMES, rowCellName } from '../document/names';
+import { INITIAL_POSE_NAMES, rowCellName, type RowCellField } from '../document/names';
 import type { DimensionName } from '../units';
 import type { CellLocation } from './cell-error';
 
@@ -46,10 +46,12 @@ function addMission(list: SheetCell[], doc: BudgetDocument): void {
 }
 
 function addRow(list: SheetCell[], sensorId: string, row: SourceRow, path: string): void {
-  const extra = (field: 'value' | 'correlationTime' | 'rate'): Extra => ({ sensorId, rowId: row.id, name: rowCellName(sensorId, row.id, field) });
+  const extra = (field: RowCellField): Extra => ({ sensorId, rowId: row.id, name: rowCellName(sensorId, row.id, field) });
   add(list, path, row, 'value', undefined, extra('value'));
   add(list, `${path}.correlationTime`, row.correlationTime, 'correlationTime', 'time', extra('correlationTime'));
   add(list, `${path}.rate`, row.rate, 'rate', 'frequency', extra('rate'));
+  add(list, `${path}.tuning.value`, row.tuning?.value, 'tuning.value', undefined, extra('tuning.value'));
+  add(list, `${path}.tuning.correlationTime`, row.tuning?.correlationTime, 'tuning.correlationTime', 'time', extra('tuning.correlationTime'));
 }
 
 function addSensor(list: SheetCell[], s: SensorEntry, path: string): void {

@@ -6,6 +6,9 @@ import type { LineDataset } from './chart-controller';
 import { levelText, num, quantityText } from './findings-text';
 import { requirementsOf } from './result-shapes';
 
+/** Dash of the believed (filter's own) σ lines, apart from the limits' dash. */
+const BELIEVED_DASH = [2, 3];
+
 /** The three σ-over-time plots. */
 export type SigmaChartKind = 'heading' | 'position' | 'speed';
 
@@ -86,7 +89,9 @@ export function sigmaPlot(view: ViewResult, kind: SigmaChartKind): SigmaPlot {
 /**
  * The datasets of one σ plot, in the plot's unit (deg, m or m/s): the
  * result's 1σ series first (heading: `heading_sigma_deg` as it is), R95 on
- * the position plot when a horizontal requirement exists, then each
+ * the position plot when a horizontal requirement exists; with a filter
+ * design, each base series as the filter believes it (dotted) and as its
+ * actual error; then each
  * requirement's own curve at its level (once per quantity and level), then
  * each requirement's limit as a dashed line over its window.
  */
@@ -97,6 +102,15 @@ export function sigmaDatasets(view: ViewResult, kind: SigmaChartKind): LineDatas
   const showsR95 = kind === 'position' && reqs.some((r) => r.quantity === 'horizontal') && series.r95_m !== undefined;
   const base = [...spec.base, ...(showsR95 ? [['r95_m', 'R95'] as [string, string]] : [])].filter(([key]) => series[key]);
   const lines: LineDataset[] = base.map(([key, label], i) => line(label, series[key].slice(), seriesColour(i)));
+  // With a filter design: what the filter believes (dashed) and its actual error, beside the optimal filter's.
+  const design = view.result?.filterDesign;
+  if (design) {
+    for (const [key, label] of base) {
+      const believed = design.believed.series[key], actual = design.actual.series[key];
+      if (believed) lines.push({ ...line(`${label}, believed by the filter as tuned`, believed.slice(), seriesColour(lines.length)), borderDash: BELIEVED_DASH });
+      if (actual) lines.push(line(`${label}, actual with the filter as tuned`, actual.slice(), seriesColour(lines.length)));
+    }
+  }
   const drawn = new Set<string>();
   for (const c of view.curves) {
     const key = `${c.quantity}|${c.level}`;

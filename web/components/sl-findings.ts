@@ -6,6 +6,7 @@ import { calibrationGroups, type CalibrationGroup } from '../charts/calibration-
 import { checkpointsOf } from '../charts/result-shapes';
 import { hasSigmaChart, type SigmaChartKind } from '../charts/sigma-series';
 import './sl-verdicts';
+import './sl-filter-design';
 import './sl-sigma-chart';
 import './sl-plan-view';
 import './sl-share-chart';
@@ -121,6 +122,7 @@ export class SlFindings extends LitElement {
       case 'time':
         return html`
           <sl-verdicts .result=${result} ?provisional=${view.cellErrors.length > 0 || view.omitted.length > 0}></sl-verdicts>
+          ${result.filterDesign ? html`<sl-filter-design .design=${result.filterDesign}></sl-filter-design>` : nothing}
           ${SIGMA_CHARTS.filter((k) => hasSigmaChart(view, k)).map((k) => html`<sl-sigma-chart kind=${k} .view=${view}></sl-sigma-chart>`)}
           <div><h3>Path from above</h3><sl-plan-view .plan=${view.plan}></sl-plan-view></div>`;
       case 'shares':

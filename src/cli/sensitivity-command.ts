@@ -1,0 +1,42 @@
+/**
+ * `sigma-ledger sensitivity FILE [--rows A.B,C.D] [--range LOW,HIGH] [--json]`:
+ * every value marked assumed (and the rows picked) scaled over the range,
+ * ranked by the change it makes to each requirement's worst value.
+ */
+import { InputError } from '../errors';
+import { assumptionSensitivity } from '../sensitivity/assumption-sensitivity';
+import { formatSensitivity } from '../report/sensitivity-text';
+import type { ParsedValues } from './allan-command';
+import { EXIT, type Io } from './commands';
+import { loadBudget, sheetProblems, withDocumentPaths } from './load-budget';
+
+/** The options `sensitivity` adds (besides `--json`). */
+export const SENSITIVITY_CLI_OPTIONS = {
+  rows: { type: 'string' },
+  range: { type: 'string' },
+} as const;
+
+/**
+ * Runs the command; exit 0 with the table, 2 for bad input.
+ * @throws InputError naming the option or the file's field.
+ */
+export function sensitivityCommand(file: string, values: ParsedValues, io: Io): number {
+  const range = parseRange(values.range);
+  const rows = typeof values.rows === 'string' ? values.rows.split(',').map((r) => r.trim()).filter(Boolean) : [];
+  const loaded = loadBudget(file);
+  const problems = sheetProblems(loaded);
+  for (const p of problems) io.err(`${p}\n`);
+  if (problems.length) return EXIT.badInput;
+  const entries = withDocumentPaths(loaded, (input) => assumptionSensitivity(input, { rows, range }));
+  io.out(values.json === true ? JSON.stringify({ range, entries }) + '\n' : formatSensitivity(entries, range));
+  return EXIT.pass;
+}
+
+function parseRange(text: string | boolean | undefined): [number, number] {
+  if (typeof text !== 'string') return [0.5, 2];
+  const parts = text.split(',').map(Number);
+  if (parts.length !== 2 || !parts.every((v) => v > 0 && Number.isFinite(v)) || !(parts[1] > parts[0])) {
+    throw new InputError('--range', `must be two scales LOW,HIGH with 0 < LOW < HIGH, e.g. 0.5,2; got "${text}"`);
+  }
+  return [parts[0], parts[1]];
+}

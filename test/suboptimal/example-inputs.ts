@@ -1,0 +1,19 @@
+import { readFileSync, readdirSync } from 'node:fs';
+import { parseBudgetDocument } from '../../src/document';
+import { evaluateBudgetDocument } from '../../src/sheet';
+import type { BudgetInput } from '../../src/inputs/budget-input';
+
+/** Every example budget in budgets/, evaluated to the engine's input (invented scenarios). */
+export function exampleInputs(): [string, BudgetInput][] {
+  return readdirSync('budgets')
+    .filter((f) => f.endsWith('.json') && !f.endsWith('.schema.json'))
+    .map((f) => {
+      const { document } = parseBudgetDocument(readFileSync(`budgets/${f}`, 'utf8'), f);
+      return [f, evaluateBudgetDocument(document).input!] as [string, BudgetInput];
+    });
+}
+
+/** The input with every row's `tuning` removed: the filter is the truth. */
+export function withoutTuning(input: BudgetInput): BudgetInput {
+  return { ...input, sensors: input.sensors.map((s) => ({ ...s, sources: s.sources.map(({ tuning: _t, ...row }) => row) })) };
+}
