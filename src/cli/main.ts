@@ -5,6 +5,7 @@ import { checkCommand, EXIT, runCommand, sizeCommand, type Io } from './commands
 import { ALLAN_CLI_OPTIONS, allanCommand, allanOptionsFromArgs } from './allan-command';
 import { CALIBRATE_CLI_OPTIONS, calibrateCommand, calibrateOptionsFromArgs } from './calibrate-command';
 import { INTO_CLI_OPTIONS } from './write-into-budget';
+import { REPORT_CLI_OPTIONS, reportCommand, reportOptionsFromArgs } from './report-command';
 
 const USAGE = `sigma-ledger: sensor error budgets by covariance analysis
 
@@ -15,6 +16,10 @@ usage:
       full result (series thinned to every N-th step with --every)
   sigma-ledger size FILE --requirement ID --vary SENSOR.ROW [--tolerance REL] [--json]
       the largest value of one row's magnitude that still meets a requirement
+  sigma-ledger report FILE [--out PATH] [--format html|md]
+      the design-review report: one self-contained HTML file (or Markdown) with
+      the scenario, verdicts, charts, budgets, every row and every R, Q and P0
+      entry traced to its row, the assumed values and the file's SHA-256
   sigma-ledger check FILE
       validate the file and evaluate its cells without running the analysis
   sigma-ledger allan LOG --column NAME --unit UNIT [--time-column NAME] [--time-unit U]
@@ -44,6 +49,7 @@ const OPTIONS = {
   ...ALLAN_CLI_OPTIONS,
   ...CALIBRATE_CLI_OPTIONS,
   ...INTO_CLI_OPTIONS,
+  ...REPORT_CLI_OPTIONS,
 } as const;
 
 /** Runs the command line; returns the exit code. Messages for bad input go to `io.err`, never as a stack trace. */
@@ -69,12 +75,14 @@ export async function main(argv: string[], io: Io = processIo()): Promise<number
         return sizeCommand(file, values.requirement, values.vary, relativeTolerance(values.tolerance), values.json, io);
       case 'check':
         return checkCommand(file, io);
+      case 'report':
+        return reportCommand(reportOptionsFromArgs(file, values), io);
       case 'allan':
         return await allanCommand(allanOptionsFromArgs(file, values), io);
       case 'calibrate':
         return await calibrateCommand(calibrateOptionsFromArgs(file, values), io);
       default:
-        return usageError(io, `unknown command "${command}"; use run, size, check, allan or calibrate`);
+        return usageError(io, `unknown command "${command}"; use run, size, report, check, allan or calibrate`);
     }
   } catch (e) {
     if (e instanceof SigmaLedgerError) {

@@ -10,6 +10,7 @@ export const compass: SensorKindSpec = {
   kind: 'compass',
   label: 'compass heading',
   role: 'aiding',
+  model: 'measures heading; h = 1 on the heading error plus the compass bias state when a bias row is given; R from its white-noise row, in rad²',
   sourceKinds: ['white-noise', 'turn-on-bias'],
   place(b: ModelBuilder, sensor: SensorInput, ctx: SensorContext): void {
     const rateHz = sensorRateHz(sensor, ctx.path);

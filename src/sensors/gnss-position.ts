@@ -13,6 +13,7 @@ export const gnssPosition: SensorKindSpec = {
   kind: 'gnss-position',
   label: 'GNSS position',
   role: 'aiding',
+  model: 'measures north and east position; h = 1 on the north or east error plus the multipath state when modelled; R per axis from its white-noise row, in m²',
   sourceKinds: ['white-noise', 'multipath'],
   place(b: ModelBuilder, sensor: SensorInput, ctx: SensorContext): void {
     const rateHz = sensorRateHz(sensor, ctx.path);

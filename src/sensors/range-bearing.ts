@@ -22,6 +22,7 @@ export const rangeBearing: SensorKindSpec = {
   kind: 'range-bearing',
   label: 'range-bearing sensor',
   role: 'aiding',
+  model: 'measures range and/or bearing to each landmark within maximum range and field of view; h from the line of sight linearised at the nominal position, plus a range or bearing bias state when given; R from its range and bearing rows (m², rad²)',
   sourceKinds: ['white-noise', 'turn-on-bias'],
   place(b: ModelBuilder, sensor: SensorInput, ctx: SensorContext): void {
     const rateHz = sensorRateHz(sensor, ctx.path);

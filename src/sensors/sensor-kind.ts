@@ -16,6 +16,8 @@ export interface SensorKindSpec {
   kind: SensorKind;
   label: string;
   role: 'dead-reckoning' | 'aiding';
+  /** One sentence on what the sensor measures or drives in the error-state model, for reports. */
+  model: string;
   /** Source kinds its rows may have. */
   sourceKinds: SourceKind[];
   /** Adds the sensor's states, noise and measurements to the model. */

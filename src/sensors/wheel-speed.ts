@@ -14,6 +14,7 @@ export const wheelSpeed: SensorKindSpec = {
   kind: 'wheel-speed',
   label: 'wheel-speed sensor',
   role: 'dead-reckoning',
+  model: 'drives along-track position with the measured speed; its noise enters Q of the position error, its scale factor is a state',
   sourceKinds: ['white-noise', 'scale-factor', 'quantisation'],
   place(b: ModelBuilder, sensor: SensorInput, ctx: SensorContext): void {
     refuseOutages(sensor, ctx.path);

@@ -18,6 +18,7 @@ export const yawGyro: SensorKindSpec = {
   kind: 'yaw-gyro',
   label: 'yaw-rate gyro',
   role: 'dead-reckoning',
+  model: 'drives heading with the measured turn rate; its noise enters Q of the heading error, its biases and scale factor are states',
   sourceKinds: ['white-noise', 'bias-instability', 'rate-random-walk', 'turn-on-bias', 'scale-factor', 'quantisation'],
   place(b: ModelBuilder, sensor: SensorInput, ctx: SensorContext): void {
     refuseOutages(sensor, ctx.path);
