@@ -30,3 +30,9 @@ export type { RequirementResult, OutageHold } from './budget/requirements';
 export type { CheckpointBudget, QuantityBudget, SourceShare } from './budget/checkpoints';
 export { sizeSource, type SizingResult } from './budget/sizing';
 export { computeBudget, MAX_STEPS, type BudgetResult } from './pipeline';
+export {
+  buildReviewReport, renderReviewHtml, renderReviewMarkdown, REVIEW_SECTIONS, renderLineChartSvg, TOOL_VERSION,
+  type ReviewReport, type ReportProvenance, type SizingRequest, type SectionBuilder, type LineChart,
+} from './report/review';
+export { linearTicks, formatTickValues, type AxisTicks } from './report/tick-labels';
+export { serializeBudgetDocument, parseBudgetDocument, type BudgetDocument } from './document';
