@@ -6,6 +6,7 @@ import { ALLAN_CLI_OPTIONS, allanCommand, allanOptionsFromArgs } from './allan-c
 import { CALIBRATE_CLI_OPTIONS, calibrateCommand, calibrateOptionsFromArgs } from './calibrate-command';
 import { INTO_CLI_OPTIONS } from './write-into-budget';
 import { REPORT_CLI_OPTIONS, reportCommand, reportOptionsFromArgs } from './report-command';
+import { SIZE_SWEEP_CLI_OPTIONS, sizeSweepCommand } from './size-sweep';
 
 const USAGE = `sigma-ledger: sensor error budgets by covariance analysis
 
@@ -15,7 +16,11 @@ usage:
       outage, budgets at checkpoints, the R, Q and P0 used; --json prints the
       full result (series thinned to every N-th step with --every)
   sigma-ledger size FILE --requirement ID --vary SENSOR.ROW [--tolerance REL] [--json]
-      the largest value of one row's magnitude that still meets a requirement
+      the largest value of one row's magnitude that still meets a requirement,
+      printed to the tolerance's precision
+  sigma-ledger size FILE --vary SENSOR.ROW --sweep FROM:TO:N [--requirement ID]
+      the curve instead: N values from FROM to TO (the row's unit) as CSV, with
+      each requirement's worst value, limit and verdict
   sigma-ledger report FILE [--out PATH] [--format html|md]
       the design-review report: one self-contained HTML file (or Markdown) with
       the scenario, verdicts, charts, budgets, every row and every R, Q and P0
@@ -50,6 +55,7 @@ const OPTIONS = {
   ...CALIBRATE_CLI_OPTIONS,
   ...INTO_CLI_OPTIONS,
   ...REPORT_CLI_OPTIONS,
+  ...SIZE_SWEEP_CLI_OPTIONS,
 } as const;
 
 /** Runs the command line; returns the exit code. Messages for bad input go to `io.err`, never as a stack trace. */
@@ -71,6 +77,7 @@ export async function main(argv: string[], io: Io = processIo()): Promise<number
       case 'run':
         return runCommand(file, { json: values.json, every: positiveNumber(values.every, '--every', 1), output: values.output }, io);
       case 'size':
+        if (values.sweep !== undefined && values.vary) return sizeSweepCommand(file, values.vary, values.requirement, values.sweep, io);
         if (!values.requirement || !values.vary) return usageError(io, 'size needs --requirement ID and --vary SENSOR.ROW');
         return sizeCommand(file, values.requirement, values.vary, relativeTolerance(values.tolerance), values.json, io);
       case 'check':

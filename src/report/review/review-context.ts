@@ -25,10 +25,13 @@ export interface ReviewContext extends ReportProvenance {
   /** Each good cell's number by document path (`sensors[0].sources[1].value`), in the cell's own unit. */
   cellValues: ReadonlyMap<string, number>;
   /** Sizing runs the document asks for, in its order. */
-  sizing: SizingResult[];
+  sizing: SizingOutcome[];
   /** Cells that failed and were left out (the report is then partial). */
   problems: string[];
 }
+
+/** A sizing run's answer, or why it could not be run (an unknown row or requirement). */
+export type SizingOutcome = SizingResult | { requirementId: string; sourceId: string; problem: string };
 
 /** Significant digits of numbers in the report's tables (the JSON result keeps full precision). */
 export const REPORT_DIGITS = 4;

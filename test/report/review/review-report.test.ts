@@ -120,3 +120,27 @@ describe('the review report', () => {
     expect(r.err).toContain('--format');
   });
 });
+
+describe('sizing in the review report', () => {
+  it('runs what the document\'s sizing[] asks for and gives the same answer as sigma-ledger size', async () => {
+    const [report, size] = await Promise.all([
+      runCli(['report', 'budgets/harbour-launch.json']),
+      runCli(['size', 'budgets/harbour-launch.json', '--requirement', 'bridgeHeading', '--vary', 'gyro.bi', '--json']),
+    ]);
+    const row = table(reportTables(report.out), 'sizing')[0];
+    const sized = JSON.parse(size.out);
+    expect([row[0].text, row[1].text]).toEqual(['gyro.bi', 'bridgeHeading']);
+    expect(row[3].value).toBe(sized.largestPassing);
+    expect(sized.outcome).toBe('bounded');
+  }, 60_000);
+
+  it('lists a sizing run it cannot make with the reason, and still writes the report', async () => {
+    const { parseBudgetDocument } = await import('../../../src/document');
+    const { buildReviewReport } = await import('../../../src/report/review');
+    const { document } = parseBudgetDocument(readFileSync('budgets/orchard-rover.json', 'utf8'), 'orchard-rover.json');
+    document.sizing = [{ requirement: 'alleyKeeping', vary: 'gyro.nothing' }];
+    const report = buildReviewReport(document, { fileName: 'x.json', documentSha256: '0', toolVersion: TOOL_VERSION });
+    const t = report.sections.find((s) => s.id === 'sizing')!.blocks.find((b) => b.kind === 'table')!;
+    expect(t.kind === 'table' && t.rows[0][5]).toMatch(/^not run: .*gyro\.nothing/);
+  });
+});

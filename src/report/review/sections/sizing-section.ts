@@ -2,6 +2,7 @@ import type { ReportSection } from '../review-report';
 import { fmt, type ReviewContext } from '../review-context';
 import type { SizingResult } from '../../../budget/sizing';
 import { withUnit } from '../../../units';
+import { formatToTolerance } from '../../tolerance-text';
 
 /** The sizing runs the document asks for: each row's largest value that still meets its requirement. */
 export function sizingSection(ctx: ReviewContext): ReportSection | undefined {
@@ -12,7 +13,9 @@ export function sizingSection(ctx: ReviewContext): ReportSection | undefined {
       { kind: 'paragraph', text: 'Each row\'s magnitude is bisected with everything else as written (docs/planar-model.md §9); valid because the covariance of an optimal filter never decreases when a noise magnitude grows.' },
       {
         kind: 'table', id: 'sizing', caption: 'Sizing runs', columns: ['Row', 'Requirement', 'Written', 'Largest passing', 'Worst there', 'Outcome'], numericColumns: [3],
-        rows: ctx.sizing.map((s) => [s.sourceId, s.requirementId, writtenValue(ctx, s), { text: `${withUnit(fmt(s.largestPassing), s.unit)} ± ${fmt(s.tolerance)}`, value: s.largestPassing }, worstText(s), outcomeText(s)]),
+        rows: ctx.sizing.map((s) => ('problem' in s
+          ? [s.sourceId, s.requirementId, '', '', '', `not run: ${s.problem}`]
+          : [s.sourceId, s.requirementId, writtenValue(ctx, s), sizedCell(s), worstText(s), outcomeText(s)])),
       },
     ],
   };
@@ -33,4 +36,9 @@ function outcomeText(s: SizingResult): string {
   if (s.outcome === 'never-passes') return 'fails even at zero: other sources must improve first';
   if (s.outcome === 'always-passes') return `holds for every value tried (${s.stoppedBecause})`;
   return `fails from ${fmt(s.smallestFailing!)} (${s.trials} runs)`;
+}
+
+function sizedCell(s: SizingResult) {
+  const t = formatToTolerance(s.largestPassing, s.tolerance);
+  return { text: s.tolerance > 0 ? `${withUnit(t.value, s.unit)} ± ${t.tolerance}` : withUnit(fmt(s.largestPassing), s.unit), value: s.largestPassing };
 }
