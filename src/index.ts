@@ -36,3 +36,8 @@ export {
 } from './report/review';
 export { linearTicks, formatTickValues, type AxisTicks } from './report/tick-labels';
 export { serializeBudgetDocument, parseBudgetDocument, type BudgetDocument } from './document';
+export { sizableRowIds, requirementsWith } from './budget/sizing';
+export { sweepRow, sweepValues, type RowSweep, type SweepPoint } from './budget/row-sweep';
+export { longestOutage, requirementsWithOutage, outageSpan, type OutageLimit, type OutageRef } from './budget/outage-sizing';
+export { evaluateBudgetDocument } from './sheet';
+export { formatToTolerance } from './report/tolerance-text';

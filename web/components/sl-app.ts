@@ -92,7 +92,7 @@ export class SlApp extends LitElement {
       ${this.message ? html`<div class="banner" role="alert">${this.message}<button @click=${() => (this.message = undefined)}>Dismiss</button></div>` : nothing}
       <main>
         <sl-workbench .store=${this.store} .view=${c.view}></sl-workbench>
-        <sl-findings .view=${c.view} .stale=${c.stale} .status=${c.status}></sl-findings>
+        <sl-findings .view=${c.view} .stale=${c.stale} .status=${c.status} .document=${this.store.document}></sl-findings>
       </main>
     `;
   }

@@ -12,10 +12,12 @@ import './sl-share-chart';
 import './sl-checkpoint-table';
 import './sl-calibration-chart';
 import './sl-noise-ledger';
+import './sl-sizing-panel';
+import type { BudgetDocument } from '../../src/index';
 
 /** The findings' tabs, in order, with their labels. */
 export const FINDINGS_TABS = [
-  ['time', 'Over time'], ['shares', 'Shares'], ['checkpoint', 'Checkpoint'], ['calibration', 'Calibration'], ['noise', 'R · Q · P0'],
+  ['time', 'Over time'], ['shares', 'Shares'], ['checkpoint', 'Checkpoint'], ['calibration', 'Calibration'], ['noise', 'R · Q · P0'], ['sizing', 'Sizing'],
 ] as const;
 
 /** Key of a findings tab. */
@@ -60,6 +62,8 @@ export class SlFindings extends LitElement {
   @property({ type: Boolean, reflect: true, attribute: 'data-stale' }) stale = false;
   /** Where the latest recompute stands. */
   @property() status: FindingsStatus = 'idle';
+  /** The open document, for sizing (which runs its own computations). */
+  @property({ attribute: false }) document?: BudgetDocument;
 
   @state() private tab: FindingsTab = 'time';
   /** Tabs opened so far: kept on the page (hidden) so their pickers and charts survive switching. */
@@ -140,6 +144,8 @@ export class SlFindings extends LitElement {
       }
       case 'noise':
         return html`<sl-noise-ledger .noise=${result.noise} budget-title=${view.title} caution=${view.caution}></sl-noise-ledger>`;
+      case 'sizing':
+        return html`<sl-sizing-panel .document=${this.document} .requirementIds=${result.requirements.map((r) => r.id)}></sl-sizing-panel>`;
     }
   }
 
