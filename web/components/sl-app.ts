@@ -170,7 +170,10 @@ export class SlApp extends LitElement {
     const select = e.target as HTMLSelectElement;
     const example = EXAMPLES[Number(select.value)];
     select.value = '';
-    if (example) this.store.replace(example.document, example.fileName, `load example ${example.fileName}`);
+    if (!example) return;
+    // Loading is undoable, but say so before replacing edited work.
+    if (this.store.canUndo && !window.confirm(`Replace "${this.store.document.title}" (${this.store.fileName}) with the example "${example.document.title}"? Undo brings your budget back.`)) return;
+    this.store.replace(example.document, example.fileName, `load example ${example.fileName}`);
   }
 }
 

@@ -40,9 +40,11 @@ export class SlFindings extends LitElement {
   static override styles = css`
     :host { display: block; background: var(--sl-paper); font-size: 13px; }
     .bar { position: sticky; top: 0; z-index: 2; background: var(--sl-paper); border-bottom: 1px solid var(--sl-rule); padding: 6px 12px 0; }
-    [role='tablist'] { display: flex; gap: 2px; }
+    [role='tablist'] { display: flex; flex-wrap: wrap; gap: 2px; }
     [role='tab'] { white-space: nowrap; font: inherit; border: 1px solid transparent; border-bottom: none; background: none; padding: 4px 10px; cursor: pointer; color: var(--sl-ink-soft); border-radius: var(--sl-radius) var(--sl-radius) 0 0; }
     [role='tab'][aria-selected='true'] { background: var(--sl-panel); border-color: var(--sl-rule); color: var(--sl-ink); font-weight: 600; margin-bottom: -1px; }
+    [role='tab']:hover { background: var(--sl-accent-soft); color: var(--sl-ink); }
+    [role='tab'][aria-selected='true']:hover { background: var(--sl-panel); color: var(--sl-ink); text-decoration: underline; }
     .pending { margin: 6px 0; font-size: 12px; color: var(--sl-warn-ink); }
     .stale-label { position: sticky; top: 31px; z-index: 2; font-size: 12px; font-weight: 600; background: var(--sl-warn-bg); color: var(--sl-warn-ink); padding: 3px 12px; border-bottom: 1px solid var(--sl-rule); }
     .results { padding: 10px 12px 24px; }
