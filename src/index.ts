@@ -41,3 +41,14 @@ export { RUNS_PER_BLOCK, blockCount, shardBlocks, reduceNodes, type BlockNode } 
 export { studyStatistics, type StudyStatistics, type QuantityStatistics, type NeesStatistics } from './simulation/study-statistics';
 export { findFlags, type SimulationFlag } from './simulation/study-flags';
 export { simulationVerdict, simulationJson, formatSimulationSummary, type StudyIdentity } from './simulation/simulation-report';
+export {
+  buildReviewReport, renderReviewHtml, renderReviewMarkdown, REVIEW_SECTIONS, renderLineChartSvg, TOOL_VERSION,
+  type ReviewReport, type ReportProvenance, type SizingRequest, type SectionBuilder, type LineChart,
+} from './report/review';
+export { linearTicks, formatTickValues, type AxisTicks } from './report/tick-labels';
+export { serializeBudgetDocument, parseBudgetDocument, type BudgetDocument } from './document';
+export { sizableRowIds, requirementsWith } from './budget/sizing';
+export { sweepRow, sweepValues, type RowSweep, type SweepPoint } from './budget/row-sweep';
+export { longestOutage, requirementsWithOutage, outageSpan, type OutageLimit, type OutageRef } from './budget/outage-sizing';
+export { evaluateBudgetDocument } from './sheet';
+export { formatToTolerance } from './report/tolerance-text';

@@ -56,7 +56,8 @@ export function sizeSource(input: BudgetInput, requirementId: string, sourceId: 
   let trials = 0;
   const trial = (value: number): RequirementResult => {
     const r = evaluateWith(input, sourceId, value, requirementId);
-    options.onTrial?.(++trials, value, r.verdict);
+    trials++;
+    options.onTrial?.(trials, value, r.verdict);
     return r;
   };
   const base = { requirementId, sourceId, unit: row.value.unit };
@@ -88,24 +89,48 @@ export function sizeSource(input: BudgetInput, requirementId: string, sourceId: 
   };
 }
 
-function findRow(input: BudgetInput, sourceId: string): SourceInput {
+/** Ids (`sensorId.rowId`) of every row whose magnitude can be sized or swept, in document order. */
+export function sizableRowIds(input: BudgetInput): string[] {
+  return (input.sensors ?? []).flatMap((s) => (s.sources ?? []).map((r) => `${s.id}.${r.id}`));
+}
+
+/**
+ * The row `sourceId` (`sensorId.rowId`) of an input.
+ * @throws InputError at 'vary' listing the rows that exist.
+ */
+export function findRow(input: BudgetInput, sourceId: string): SourceInput {
   const dot = sourceId.indexOf('.');
   const sensor = input.sensors?.find((s) => s.id === sourceId.slice(0, dot));
   const row = sensor?.sources?.find((r) => r.id === sourceId.slice(dot + 1));
-  if (dot < 0 || !row) throw new InputError('vary', `no row "${sourceId}"; give it as sensorId.rowId`);
+  if (dot < 0 || !row) throw new InputError('vary', `no row "${sourceId}"; give it as sensorId.rowId, one of ${sizableRowIds(input).join(', ')}`);
   return row;
 }
 
-/** Runs the total covariance only (no contributions) with one row's value replaced. */
-function evaluateWith(input: BudgetInput, sourceId: string, value: number, requirementId: string): RequirementResult {
+/**
+ * Every requirement's verdict with one row's magnitude replaced by `value`
+ * (in the row's unit), from one run of the total covariance (no contributions).
+ * @throws InputError for an unknown row or a value outside the row's valid range.
+ */
+export function requirementsWith(input: BudgetInput, sourceId: string, value: number): RequirementResult[] {
   const copy = JSON.parse(JSON.stringify(input)) as BudgetInput;
   findRow(copy, sourceId).value.value = value;
-  const mission = resolveMission(copy.mission);
-  const stepS = positiveToSI(copy.step, 'time', 'step');
-  const model = buildErrorModel(copy.sensors, mission, copy.mission.initialSigmaNotes);
-  const req = resolveRequirements(copy.requirements, mission.durationS).find((r) => r.id === requirementId);
-  if (!req) throw new InputError('requirement', `no requirement "${requirementId}"`);
+  return requirementsOf(copy);
+}
+
+/** Every requirement's verdict of an input, from one run of the total covariance. */
+export function requirementsOf(input: BudgetInput): RequirementResult[] {
+  const mission = resolveMission(input.mission);
+  const stepS = positiveToSI(input.step, 'time', 'step');
+  const model = buildErrorModel(input.sensors, mission, input.mission.initialSigmaNotes);
+  const reqs = resolveRequirements(input.requirements, mission.durationS);
   const traj = buildNominalTrajectory(mission, stepS);
   const series = buildBudgetSeries(model, traj, runCovariance(model, traj, { contributions: false }));
-  return evaluateRequirement(req, series, model.streams);
+  return reqs.map((r) => evaluateRequirement(r, series, model.streams));
+}
+
+/** One requirement's verdict with one row's value replaced. */
+function evaluateWith(input: BudgetInput, sourceId: string, value: number, requirementId: string): RequirementResult {
+  const r = requirementsWith(input, sourceId, value).find((x) => x.id === requirementId);
+  if (!r) throw new InputError('requirement', `no requirement "${requirementId}"; the budget has ${(input.requirements ?? []).map((x) => x.id).join(', ') || 'none'}`);
+  return r;
 }

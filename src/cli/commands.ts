@@ -10,6 +10,8 @@ import { buildJsonResult } from '../report/json-result';
 import { formatSignificant } from '../units';
 import { loadBudget, sheetProblems, withDocumentPaths, type LoadedBudget } from './load-budget';
 import { filterDesignReport } from './filter-design-report';
+import { checkSizingTarget } from './sizing-target';
+import { formatToTolerance } from '../report/tolerance-text';
 
 /** Exit codes: every requirement holds, some requirement fails, bad input. */
 export const EXIT = { pass: 0, fail: 1, badInput: 2 } as const;
@@ -76,13 +78,7 @@ export function sizeCommand(file: string, requirementId: string, rowId: string, 
   const loaded = loadBudget(file);
   if (reportProblems(loaded, io)) return EXIT.badInput;
   const result = withDocumentPaths(loaded, (input) => {
-    const [sensorId, ...rest] = rowId.split('.');
-    if (!input.sensors.find((s) => s.id === sensorId)?.sources.some((r) => r.id === rest.join('.'))) {
-      throw new InputError('--vary', `no row "${rowId}"; give it as sensorId.rowId, e.g. ${input.sensors[0]?.id}.${input.sensors[0]?.sources[0]?.id}`);
-    }
-    if (!input.requirements?.some((r) => r.id === requirementId)) {
-      throw new InputError('--requirement', `no requirement "${requirementId}"; the file has ${(input.requirements ?? []).map((r) => r.id).join(', ') || 'none'}`);
-    }
+    checkSizingTarget(input, rowId, requirementId);
     return sizeSource(input, requirementId, rowId, {
       relativeTolerance: tolerance,
       onTrial: (n, value, verdict) => io.err(`trial ${n}: ${rowId} = ${formatSignificant(value, 6)} -> ${verdict}\n`),
@@ -136,10 +132,11 @@ function formatSizing(r: SizingResult): string {
     case 'always-passes':
       return `${r.requirementId} holds for every ${r.sourceId} tried, up to ${formatSignificant(r.largestPassing, 6)} ${r.unit} (${r.stoppedBecause}).\n`;
     default:
+      const pass = formatToTolerance(r.largestPassing, r.tolerance), fail = formatToTolerance(r.smallestFailing!, r.tolerance);
       return [
-        `largest ${r.sourceId} meeting ${r.requirementId}: ${formatSignificant(r.largestPassing, 6)} ${r.unit} (± ${formatSignificant(r.tolerance, 2)} ${r.unit}, ${r.trials} runs)`,
-        `  at ${formatSignificant(r.largestPassing, 6)} ${r.unit}: worst ${at(r.atLargestPassing)}`,
-        `  at ${formatSignificant(r.smallestFailing!, 6)} ${r.unit}: worst ${at(r.atSmallestFailing)}`,
+        `largest ${r.sourceId} meeting ${r.requirementId}: ${pass.value} ${r.unit} (± ${pass.tolerance} ${r.unit}, ${r.trials} runs)`,
+        `  at ${pass.value} ${r.unit}: worst ${at(r.atLargestPassing)}`,
+        `  at ${fail.value} ${r.unit}: worst ${at(r.atSmallestFailing)}`,
         '',
       ].join('\n');
   }

@@ -9,6 +9,8 @@ import { SENSITIVITY_CLI_OPTIONS, sensitivityCommand } from './sensitivity-comma
 import { rSweepCommand } from './r-sweep-command';
 import { SIMULATE_CLI_OPTIONS, simulateCommand, simulateOptionsFromArgs } from './simulate-command';
 import { mergeCommand } from './merge-command';
+import { REPORT_CLI_OPTIONS, reportCommand, reportOptionsFromArgs } from './report-command';
+import { SIZE_SWEEP_CLI_OPTIONS, sizeSweepCommand } from './size-sweep';
 
 const USAGE = `sigma-ledger: sensor error budgets by covariance analysis
 
@@ -18,7 +20,15 @@ usage:
       outage, budgets at checkpoints, the R, Q and P0 used; --json prints the
       full result (series thinned to every N-th step with --every)
   sigma-ledger size FILE --requirement ID --vary SENSOR.ROW [--tolerance REL] [--json]
-      the largest value of one row's magnitude that still meets a requirement
+      the largest value of one row's magnitude that still meets a requirement,
+      printed to the tolerance's precision
+  sigma-ledger size FILE --vary SENSOR.ROW --sweep FROM:TO:N [--requirement ID]
+      the curve instead: N values from FROM to TO (the row's unit) as CSV, with
+      each requirement's worst value, limit and verdict
+  sigma-ledger report FILE [--out PATH] [--format html|md]
+      the design-review report: one self-contained HTML file (or Markdown) with
+      the scenario, verdicts, charts, budgets, every row and every R, Q and P0
+      entry traced to its row, the assumed values and the file's SHA-256
   sigma-ledger check FILE
       validate the file and evaluate its cells without running the analysis
   sigma-ledger allan LOG --column NAME --unit UNIT [--time-column NAME] [--time-unit U]
@@ -69,6 +79,8 @@ const OPTIONS = {
   ...INTO_CLI_OPTIONS,
   ...SENSITIVITY_CLI_OPTIONS,
   ...SIMULATE_CLI_OPTIONS,
+  ...REPORT_CLI_OPTIONS,
+  ...SIZE_SWEEP_CLI_OPTIONS,
 } as const;
 
 /** Runs the command line; returns the exit code. Messages for bad input go to `io.err`, never as a stack trace. */
@@ -91,10 +103,13 @@ export async function main(argv: string[], io: Io = processIo()): Promise<number
       case 'run':
         return runCommand(file, { json: values.json, every: positiveNumber(values.every, '--every', 1), output: values.output }, io);
       case 'size':
+        if (values.sweep !== undefined && values.vary) return sizeSweepCommand(file, values.vary, values.requirement, values.sweep, io);
         if (!values.requirement || !values.vary) return usageError(io, 'size needs --requirement ID and --vary SENSOR.ROW');
         return sizeCommand(file, values.requirement, values.vary, relativeTolerance(values.tolerance), values.json, io);
       case 'check':
         return checkCommand(file, io);
+      case 'report':
+        return reportCommand(reportOptionsFromArgs(file, values), io);
       case 'allan':
         return await allanCommand(allanOptionsFromArgs(file, values), io);
       case 'calibrate':
@@ -106,7 +121,7 @@ export async function main(argv: string[], io: Io = processIo()): Promise<number
       case 'simulate':
         return await simulateCommand(simulateOptionsFromArgs(file, values, process.env), io);
       default:
-        return usageError(io, `unknown command "${command}"; use run, size, check, allan, calibrate, simulate, merge, sensitivity or r-sweep`);
+        return usageError(io, `unknown command "${command}"; use run, size, report, check, allan, calibrate, simulate, merge, sensitivity or r-sweep`);
     }
   } catch (e) {
     if (e instanceof SigmaLedgerError) {

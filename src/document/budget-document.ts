@@ -145,6 +145,13 @@ export interface CheckpointEntry {
   note?: string;
 }
 
+/** A sizing run the review report includes: row `vary` (sensorId.rowId) against requirement `requirement`. */
+export interface SizingRunEntry {
+  requirement: string;
+  vary: string;
+  note?: string;
+}
+
 /** A whole budget document of the current format version. */
 export interface BudgetDocument {
   $schema?: string;
@@ -158,4 +165,5 @@ export interface BudgetDocument {
   sensors: SensorEntry[];
   requirements?: RequirementEntry[];
   checkpoints?: CheckpointEntry[];
+  sizing?: SizingRunEntry[];
 }

@@ -1,6 +1,7 @@
 import { InputError } from '../errors';
 import { nonNegativeToSI, positiveToSI, quantityToSI, requireArray } from '../inputs/checks';
-import type { MissionInput } from '../inputs/budget-input';
+import type { MissionInput, Quantity } from '../inputs/budget-input';
+import { describeConversion, type DimensionName } from '../units';
 
 /** One segment in SI, with its place on the mission clock. */
 export interface ResolvedSegment {
@@ -19,6 +20,8 @@ export interface ResolvedMission {
   startHeadingRad: number;
   initialPositionSigmaM: number;
   initialHeadingSigmaRad: number;
+  /** How the start-pose sigmas were converted to SI, one line each, so P0 traces back to the mission's cells. */
+  initialSigmaConversions: { position: string; heading: string };
   segments: ResolvedSegment[];
   durationS: number;
 }
@@ -57,7 +60,16 @@ export function resolveMission(mission: MissionInput | undefined, path = 'missio
     startHeadingRad: quantityToSI(start.heading, 'angle', `${path}.start.heading`),
     initialPositionSigmaM: nonNegativeToSI(sigma.position, 'length', `${path}.initialSigma.position`),
     initialHeadingSigmaRad: nonNegativeToSI(sigma.heading, 'angle', `${path}.initialSigma.heading`),
+    initialSigmaConversions: {
+      position: conversionText(sigma.position, 'length', `${path}.initialSigma.position`),
+      heading: conversionText(sigma.heading, 'angle', `${path}.initialSigma.heading`),
+    },
     segments,
     durationS: clockS,
   };
+}
+
+/** The conversion line of a quantity already checked by nonNegativeToSI. */
+function conversionText(q: Quantity, expected: DimensionName, path: string): string {
+  return describeConversion(q.value, q.unit, expected, path).text;
 }

@@ -1,7 +1,7 @@
 import type { BudgetResult } from '../pipeline';
 import type { RequirementResult } from '../budget/requirements';
 import type { CheckpointBudget } from '../budget/checkpoints';
-import { formatSignificant } from '../units';
+import { formatSignificant, withUnit } from '../units';
 import { confidenceFactor1D } from '../budget/confidence';
 import type { ConfidenceLevel } from '../inputs/budget-input';
 import { CAUTION } from './caution';
@@ -105,7 +105,7 @@ function traceLines(result: BudgetResult): string[] {
   const block = (title: string, entries: TracedEntry[]) => [
     title,
     ...entries.flatMap((e) => [
-      `  ${e.name}: ${fmt(e.totalSI)} ${e.unitSI}`,
+      `  ${e.name}: ${withUnit(fmt(e.totalSI), e.unitSI)}`,
       ...e.pieces.flatMap((p) => [`      ${fmt(p.valueSI)} from ${p.sourceId}: ${p.derivation}`, ...p.conversions.map((c) => `          ${c}`)]),
     ]),
   ];

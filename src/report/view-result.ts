@@ -5,8 +5,8 @@ import type { OmittedItem } from '../sheet/cell-reader';
 import type { SheetEvaluation } from '../sheet/sheet-evaluation';
 import { computeBudget } from '../pipeline';
 import { SigmaLedgerError } from '../errors';
-import { levelSeries, limitDimension } from '../budget/levels';
-import { fromSI, toSI } from '../units';
+import { toSI } from '../units';
+import { requirementSeries } from './requirement-curves';
 import { buildJsonResult, keptSteps, type JsonResult } from './json-result';
 import { CAUTION } from './caution';
 import { hasFilterDesign } from '../suboptimal/filter-rows';
@@ -76,12 +76,7 @@ export function viewFromSheet(doc: BudgetDocument, sheet: SheetEvaluation, optio
     const every = Math.ceil(r.trajectory.tS.length / MAX_CHART_POINTS);
     const steps = keptSteps(r.trajectory.tS.length, every);
     const keep = (a: ArrayLike<number>) => steps.map((k) => a[k]);
-    const curves = r.requirements.map((req) => {
-      const spec = sheet.input!.requirements!.find((x) => x.id === req.id)!;
-      const series = levelSeries(r.series, spec.quantity, spec.level, req.id);
-      const dim = limitDimension(spec.quantity);
-      return { id: req.id, quantity: spec.quantity, level: spec.level, limit: req.limit.value, unit: req.limit.unit, values: keep(series).map((v) => fromSI(v, req.limit.unit, dim, req.id)) };
-    });
+    const curves = requirementSeries(r).map((c) => ({ ...c, values: keep(c.values) }));
     const plan: PlanView = {
       north: keep(r.trajectory.northM), east: keep(r.trajectory.eastM), t: keep(r.trajectory.tS),
       landmarks: sheet.input.sensors.flatMap((s) => (s.landmarks ?? []).map((l) => ({

@@ -34,6 +34,8 @@ export function buildErrorModel(sensors: SensorInput[], mission: ResolvedMission
   );
   const head = emptySource(INITIAL_HEADING_ID, 'mission', 'initial-heading', 'initial heading', notes.heading);
   head.initialVariance.push({ state: b.core.heading, varianceSI: mission.initialHeadingSigmaRad ** 2 });
+  pos.conversions.push({ field: 'value', text: mission.initialSigmaConversions.position });
+  head.conversions.push({ field: 'value', text: mission.initialSigmaConversions.heading });
   b.sources.push(pos, head);
   const placed = list.map((sensor, i) => {
     const spec = SENSOR_KINDS[sensor.kind];

@@ -21,6 +21,7 @@ export const compass: SensorKindSpec<'compass'> = defineSensorKind({
   kind: 'compass',
   label: 'compass heading',
   role: 'aiding',
+  model: 'measures heading; h = 1 on the heading error plus the compass bias state when a bias row is given; R from its white-noise row, in rad²',
   defaults: { id: 'compass', rateHz: 10 },
   rows: { 'white-noise': ['angle'], 'turn-on-bias': ['angle'] },
   logs: { calibration: ['angle'] },

@@ -25,6 +25,7 @@ export const gnssPosition: SensorKindSpec<'gnss-position'> = defineSensorKind({
   kind: 'gnss-position',
   label: 'GNSS position',
   role: 'aiding',
+  model: 'measures north and east position; h = 1 on the north or east error plus the multipath state when modelled; R per axis from its white-noise row, in m²',
   defaults: { id: 'gnss', rateHz: 1 },
   rows: { 'white-noise': ['length'], multipath: ['length'] },
   measurements: [{ key: 'north', unitSI: 'm' }, { key: 'east', unitSI: 'm' }],

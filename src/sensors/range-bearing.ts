@@ -41,6 +41,7 @@ export const rangeBearing: SensorKindSpec<'range-bearing'> = defineSensorKind({
   kind: 'range-bearing',
   label: 'range-bearing sensor',
   role: 'aiding',
+  model: 'measures range and/or bearing to each landmark within maximum range and field of view; h from the line of sight linearised at the nominal position, plus a range or bearing bias state when given; R from its range and bearing rows (m², rad²)',
   defaults: { id: 'ranger', rateHz: 5 },
   rows: { 'white-noise': ['length', 'angle'], 'turn-on-bias': ['angle', 'length'] },
   rowOptions: { 'white-noise': COMPONENT, 'turn-on-bias': COMPONENT },

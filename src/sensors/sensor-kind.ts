@@ -79,6 +79,8 @@ export interface SensorKindSpec<K extends SensorKind = SensorKind, B = ModelBuil
   label: string;
   /** Dead-reckoning inputs carry the state forward; aiding sensors measure it and may have outages. */
   role: 'dead-reckoning' | 'aiding';
+  /** One sentence on what the sensor measures or drives in the error-state model, for reports. */
+  model: string;
   /** What a new sensor of this kind gets: its id stem and its usual rate. */
   defaults: { id: string; rateHz: number };
   /**

@@ -25,6 +25,7 @@ export const wheelSpeed: SensorKindSpec<'wheel-speed'> = defineSensorKind({
   kind: 'wheel-speed',
   label: 'wheel-speed sensor',
   role: 'dead-reckoning',
+  model: 'drives along-track position with the measured speed; its noise enters Q of the position error, its scale factor is a state',
   defaults: { id: 'wheel', rateHz: 20 },
   rows: { 'white-noise': ['length-random-walk', 'speed'], 'scale-factor': ['ratio'], quantisation: ['speed'] },
   logs: { allan: 'speed', calibration: ['speed'] },

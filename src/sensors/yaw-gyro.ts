@@ -30,6 +30,7 @@ export const yawGyro: SensorKindSpec<'yaw-gyro'> = defineSensorKind({
   kind: 'yaw-gyro',
   label: 'yaw-rate gyro',
   role: 'dead-reckoning',
+  model: 'drives heading with the measured turn rate; its noise enters Q of the heading error, its biases and scale factor are states',
   defaults: { id: 'gyro', rateHz: 100 },
   rows: {
     'white-noise': ['angle-random-walk', 'angular-rate'],

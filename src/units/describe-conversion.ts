@@ -9,8 +9,11 @@ import { toSI, unitFor } from './to-si';
 /** Digits that show the value as the user wrote it (0.2, not 0.200000000000000011). */
 const INPUT_DIGITS = 15;
 
-/** A number and its unit; a plain ratio ('1' or '') is written bare. */
-function withUnit(numberText: string, unit: string): string {
+/**
+ * A number and its unit as reports print them; a plain ratio ('1' or '') is
+ * written bare, so a scale factor reads "0.003", never "0.003 1".
+ */
+export function withUnit(numberText: string, unit: string): string {
   const u = unit.trim();
   return u === '' || u === '1' ? numberText : `${numberText} ${u}`;
 }

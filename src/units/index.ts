@@ -28,7 +28,7 @@ export {
 } from './named-dimensions';
 export { convert, fromSI, toSI, unitFor } from './to-si';
 export { formatSignificant } from './format-significant';
-export { describeConversion, type ConversionRecord } from './describe-conversion';
+export { describeConversion, withUnit, type ConversionRecord } from './describe-conversion';
 export {
   densityFromRandomWalk,
   randomWalkFromDensity,

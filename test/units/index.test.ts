@@ -10,7 +10,7 @@ describe('units index', () => {
       'DIMENSIONS', 'DIMENSION_NAMES', 'describeExpected', 'dimensionOf', 'isDimensionName', 'labelWithArticle', 'unitDimension',
       'convert', 'fromSI', 'toSI', 'unitFor',
       'formatSignificant',
-      'describeConversion',
+      'describeConversion', 'withUnit',
       'densityFromRandomWalk', 'randomWalkFromDensity', 'randomWalkFromSampleSigma', 'sampleSigmaFromRandomWalk',
     ];
     expect(Object.keys(units).sort()).toEqual(expected.sort());

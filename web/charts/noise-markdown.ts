@@ -1,3 +1,4 @@
+import { withUnit } from '../../src/index';
 import type { NoiseTrace, TracedEntry } from '../../src/report/noise-trace';
 import { formatSignificant } from '../../src/units';
 
@@ -26,7 +27,7 @@ export function rootUnit(unitSI: string): string | undefined {
 /** A value with its unit, and its square root with the root unit (empty when the unit has no plain root). */
 export function valueAndRoot(valueSI: number, unitSI: string): [string, string] {
   const root = rootUnit(unitSI);
-  return [`${ledgerNumber(valueSI)} ${unitSI}`, root && valueSI >= 0 ? `${ledgerNumber(Math.sqrt(valueSI))} ${root}` : ''];
+  return [withUnit(ledgerNumber(valueSI), unitSI), root && valueSI >= 0 ? withUnit(ledgerNumber(Math.sqrt(valueSI)), root) : ''];
 }
 
 const cell = (text: string) => text.replace(/\|/g, '\\|').replace(/\s*\n\s*/g, ' ');

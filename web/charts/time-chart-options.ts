@@ -1,5 +1,6 @@
 import type { ChartOptions, TooltipItem } from 'chart.js';
 import { formatSignificant } from '../../src/units';
+import { yTickLabels } from './y-tick-labels';
 import type { OutageBand } from './outage-bands';
 
 /** What differs between the findings' time plots. */
@@ -19,18 +20,10 @@ export interface TimeChartSpec {
   logarithmic?: boolean;
 }
 
-/**
- * Log-axis tick label: over several decades (`crowded`) only at 1, 2 and 5
- * times a power of ten; otherwise at every one-digit value (0.5, 0.6, ...),
- * so the axis's own end values (0.49) do not print over their neighbours.
- */
-function logTick(v: number, crowded: boolean): string {
-  const mantissa = v / 10 ** Math.floor(Math.log10(v) + 1e-9);
-  const shown = crowded ? [1, 2, 5].some((m) => Math.abs(mantissa - m) < 1e-6) : Math.abs(mantissa - Math.round(mantissa)) < 1e-6;
-  return shown ? chartNumber(v) : '';
-}
-
 const FONT = { family: 'system-ui, sans-serif', size: 11 };
+
+/** Width of every time plot's y axis (labels and title), px. */
+export const Y_AXIS_WIDTH_PX = 68;
 
 /** A value for tooltips and ticks: three significant digits. */
 export const chartNumber = (x: number) => formatSignificant(x, 3);
@@ -54,7 +47,9 @@ export function timeChartOptions(spec: TimeChartSpec): ChartOptions<'line'> {
       y: {
         type: spec.logarithmic ? 'logarithmic' : 'linear', min: spec.logarithmic ? undefined : 0, max: spec.yMax, stacked: spec.stacked,
         title: { display: true, text: spec.yTitle, font: FONT },
-        ticks: { font: FONT, callback: (v, _i, ticks) => (spec.logarithmic ? logTick(Number(v), ticks.length > 8) : chartNumber(Number(v))) },
+        ticks: { font: FONT, callback: (_v, i, ticks) => yTickLabels(ticks.map((t) => t.value), spec.logarithmic === true)[i] },
+        // One width for every time plot's y axis, so their plot areas (and outage bands) line up on the page.
+        afterFit: (scale) => { scale.width = Y_AXIS_WIDTH_PX; },
       },
     },
     plugins: {

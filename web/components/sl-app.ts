@@ -4,7 +4,8 @@ import { SigmaLedgerError } from '../../src/errors';
 import { CAUTION } from '../../src/report/caution';
 import { DocumentStore } from '../state/document-store';
 import { Autosave } from '../state/autosave';
-import { downloadBudget, readBudgetFile } from '../state/file-io';
+import { downloadBudget, offerDownload, readBudgetFile } from '../state/file-io';
+import { makeReviewReport, reportFileName } from '../report/make-report';
 import { ComputeController } from '../compute/compute-controller';
 import { EXAMPLES } from '../examples';
 import './sl-workbench';
@@ -49,6 +50,8 @@ export class SlApp extends LitElement {
 
   @state() private message?: string;
   @state() private ready = false;
+  /** True while the report worker builds a report. */
+  @state() private reporting = false;
 
   override connectedCallback(): void {
     super.connectedCallback();
@@ -75,6 +78,8 @@ export class SlApp extends LitElement {
         <div class="title" title=${this.store.fileName}>${this.store.document.title} · ${this.store.fileName}</div>
         <label class="file" title="Open a budget file (or drop one on the page)">Open…<input type="file" accept=".json,application/json" @change=${this.opened} /></label>
         <button @click=${this.save} title="Save the budget as JSON (the same file the command line reads)">Save</button>
+        <button id="report" ?disabled=${this.reporting} @click=${this.downloadReport}
+          title="Download the design-review report: one HTML file to open, print or file (the same as sigma-ledger report)">${this.reporting ? 'Making report…' : 'Report'}</button>
         <select aria-label="Load an example budget" @change=${this.loadExample}>
           <option value="">Examples…</option>
           ${EXAMPLES.map((e, i) => html`<option value=${i}>${e.document.title}</option>`)}
@@ -87,7 +92,7 @@ export class SlApp extends LitElement {
       ${this.message ? html`<div class="banner" role="alert">${this.message}<button @click=${() => (this.message = undefined)}>Dismiss</button></div>` : nothing}
       <main>
         <sl-workbench .store=${this.store} .view=${c.view}></sl-workbench>
-        <sl-findings .view=${c.view} .stale=${c.stale} .status=${c.status}></sl-findings>
+        <sl-findings .view=${c.view} .stale=${c.stale} .status=${c.status} .document=${this.store.document}></sl-findings>
       </main>
     `;
   }
@@ -149,11 +154,26 @@ export class SlApp extends LitElement {
     downloadBudget(this.store.document, this.store.fileName);
   }
 
+  private async downloadReport(): Promise<void> {
+    this.reporting = true;
+    const { document, fileName } = this.store;
+    try {
+      offerDownload(await makeReviewReport(document, fileName, 'html'), reportFileName(fileName, 'html'), 'text/html');
+    } catch (e) {
+      this.message = `Could not make the report: ${(e as Error).message}`;
+    } finally {
+      this.reporting = false;
+    }
+  }
+
   private loadExample(e: Event): void {
     const select = e.target as HTMLSelectElement;
     const example = EXAMPLES[Number(select.value)];
     select.value = '';
-    if (example) this.store.replace(example.document, example.fileName, `load example ${example.fileName}`);
+    if (!example) return;
+    // Loading is undoable, but say so before replacing edited work.
+    if (this.store.canUndo && !window.confirm(`Replace "${this.store.document.title}" (${this.store.fileName}) with the example "${example.document.title}"? Undo brings your budget back.`)) return;
+    this.store.replace(example.document, example.fileName, `load example ${example.fileName}`);
   }
 }
 

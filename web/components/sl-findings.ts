@@ -13,10 +13,12 @@ import './sl-share-chart';
 import './sl-checkpoint-table';
 import './sl-calibration-chart';
 import './sl-noise-ledger';
+import './sl-sizing-panel';
+import type { BudgetDocument } from '../../src/index';
 
 /** The findings' tabs, in order, with their labels. */
 export const FINDINGS_TABS = [
-  ['time', 'Over time'], ['shares', 'Shares'], ['checkpoint', 'Checkpoint'], ['calibration', 'Calibration'], ['noise', 'R · Q · P0'],
+  ['time', 'Over time'], ['shares', 'Shares'], ['checkpoint', 'Checkpoint'], ['calibration', 'Calibration'], ['noise', 'R · Q · P0'], ['sizing', 'Sizing'],
 ] as const;
 
 /** Key of a findings tab. */
@@ -39,9 +41,11 @@ export class SlFindings extends LitElement {
   static override styles = css`
     :host { display: block; background: var(--sl-paper); font-size: 13px; }
     .bar { position: sticky; top: 0; z-index: 2; background: var(--sl-paper); border-bottom: 1px solid var(--sl-rule); padding: 6px 12px 0; }
-    [role='tablist'] { display: flex; gap: 2px; }
+    [role='tablist'] { display: flex; flex-wrap: wrap; gap: 2px; }
     [role='tab'] { white-space: nowrap; font: inherit; border: 1px solid transparent; border-bottom: none; background: none; padding: 4px 10px; cursor: pointer; color: var(--sl-ink-soft); border-radius: var(--sl-radius) var(--sl-radius) 0 0; }
     [role='tab'][aria-selected='true'] { background: var(--sl-panel); border-color: var(--sl-rule); color: var(--sl-ink); font-weight: 600; margin-bottom: -1px; }
+    [role='tab']:hover { background: var(--sl-accent-soft); color: var(--sl-ink); }
+    [role='tab'][aria-selected='true']:hover { background: var(--sl-panel); color: var(--sl-ink); text-decoration: underline; }
     .pending { margin: 6px 0; font-size: 12px; color: var(--sl-warn-ink); }
     .stale-label { position: sticky; top: 31px; z-index: 2; font-size: 12px; font-weight: 600; background: var(--sl-warn-bg); color: var(--sl-warn-ink); padding: 3px 12px; border-bottom: 1px solid var(--sl-rule); }
     .results { padding: 10px 12px 24px; }
@@ -61,6 +65,8 @@ export class SlFindings extends LitElement {
   @property({ type: Boolean, reflect: true, attribute: 'data-stale' }) stale = false;
   /** Where the latest recompute stands. */
   @property() status: FindingsStatus = 'idle';
+  /** The open document, for sizing (which runs its own computations). */
+  @property({ attribute: false }) document?: BudgetDocument;
 
   @state() private tab: FindingsTab = 'time';
   /** Tabs opened so far: kept on the page (hidden) so their pickers and charts survive switching. */
@@ -142,6 +148,8 @@ export class SlFindings extends LitElement {
       }
       case 'noise':
         return html`<sl-noise-ledger .noise=${result.noise} budget-title=${view.title} caution=${view.caution}></sl-noise-ledger>`;
+      case 'sizing':
+        return html`<sl-sizing-panel .document=${this.document} .requirementIds=${result.requirements.map((r) => r.id)}></sl-sizing-panel>`;
     }
   }
 

@@ -20,7 +20,7 @@ const FIELD_LABEL: Record<string, string> = { value: 'Magnitude', correlationTim
 const FIRST_LINE = SOURCE_COLUMNS.findIndex((c) => c.key === 'provenance');
 /** The unit an empty correlation time or rate override gets when typed into, shown beside it. */
 const UNIT_HINT: Record<string, string> = { tauUnit: 's', rateUnit: 'Hz' };
-const WIDTHS = ['9%', '15.5%', '14.5%', '14.5%', '8.5%', '8%', '7.5%', '8%', '14.5%'];
+const WIDTHS = ['8%', '18.5%', '16%', '13.5%', '8%', '7%', '7%', '7%', '15%'];
 
 /**
  * The selected sensor's error sources as a grid: one row per source, a

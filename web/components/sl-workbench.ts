@@ -42,6 +42,8 @@ export class SlWorkbench extends LitElement {
     [role='tablist'] { display: flex; gap: 2px; border-bottom: 2px solid var(--sl-ink); position: sticky; top: 0; background: var(--sl-paper); padding-top: 8px; z-index: 2; }
     [role='tab'] { border: 1px solid var(--sl-rule); border-bottom: none; border-radius: var(--sl-radius) var(--sl-radius) 0 0; padding: 5px 14px; font-size: 13px; background: var(--sl-paper); }
     [role='tab'][aria-selected='true'] { background: var(--sl-ink); color: var(--sl-paper); border-color: var(--sl-ink); }
+    [role='tab']:hover { background: var(--sl-accent-soft); color: var(--sl-ink); }
+    [role='tab'][aria-selected='true']:hover { background: #2f3a45; color: #ffffff; }
     .badge { color: var(--sl-fail); font-weight: 700; margin-left: 4px; }
     [aria-selected='true'] .badge { color: #ffc2ad; }
     .alerts { margin: 8px 0 0; display: grid; gap: 4px; }

@@ -9,6 +9,8 @@ interface HistoryEntry {
   label: string;
   before: BudgetDocument;
   after: BudgetDocument;
+  /** File names before and after, for steps that open another file (undo brings the old name back). */
+  fileNames?: { before: string; after: string };
 }
 
 /**
@@ -73,11 +75,13 @@ export class DocumentStore extends EventTarget {
 
   /** Replaces the whole document (opening a file) as an undoable step. */
   replace(doc: BudgetDocument, fileName: string, label = `open ${fileName}`): void {
+    const fileNames = { before: this.fileName, after: fileName };
+    this.fileName = fileName;
     this.edit(label, (d) => {
       for (const key of Object.keys(d)) delete (d as unknown as Record<string, unknown>)[key];
       Object.assign(d, structuredClone(doc));
     });
-    this.fileName = fileName;
+    this.undoStack[this.undoStack.length - 1].fileNames = fileNames;
   }
 
   undo(): void {
@@ -85,6 +89,7 @@ export class DocumentStore extends EventTarget {
     if (!entry) return;
     this.redoStack.push(entry);
     this.current = entry.before;
+    if (entry.fileNames) this.fileName = entry.fileNames.before;
     this.changed(`undo ${entry.label}`);
   }
 
@@ -93,6 +98,7 @@ export class DocumentStore extends EventTarget {
     if (!entry) return;
     this.undoStack.push(entry);
     this.current = entry.after;
+    if (entry.fileNames) this.fileName = entry.fileNames.after;
     this.changed(`redo ${entry.label}`);
   }
 

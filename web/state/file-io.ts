@@ -10,11 +10,15 @@ export async function readBudgetFile(file: File): Promise<{ document: BudgetDocu
 
 /** Offers the document for download as the same JSON the command line reads. */
 export function downloadBudget(doc: BudgetDocument, fileName: string): void {
-  const blob = new Blob([serializeBudgetDocument(doc)], { type: 'application/json' });
-  const url = URL.createObjectURL(blob);
+  offerDownload(serializeBudgetDocument(doc), fileName.endsWith('.json') ? fileName : `${fileName}.json`, 'application/json');
+}
+
+/** Offers `text` as a file download named `fileName`. */
+export function offerDownload(text: string, fileName: string, type: string): void {
+  const url = URL.createObjectURL(new Blob([text], { type }));
   const a = document.createElement('a');
   a.href = url;
-  a.download = fileName.endsWith('.json') ? fileName : `${fileName}.json`;
+  a.download = fileName;
   a.click();
   setTimeout(() => URL.revokeObjectURL(url), 1000);
 }

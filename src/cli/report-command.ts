@@ -1,0 +1,69 @@
+/**
+ * `sigma-ledger report FILE [--out PATH] [--format html|md]`: the
+ * design-review report of a budget, as one self-contained HTML file (default)
+ * or as Markdown. Without --out it goes to stdout. Exit codes as `run`: the
+ * report is written whatever the verdicts say.
+ */
+import { createHash } from 'node:crypto';
+import { readFileSync, writeFileSync } from 'node:fs';
+import { InputError } from '../errors';
+import { buildReviewReport, renderReviewHtml, renderReviewMarkdown, TOOL_VERSION } from '../report/review';
+import { EXIT, type Io } from './commands';
+import { loadBudget, sheetProblems, withDocumentPaths } from './load-budget';
+
+/** The report's file formats. */
+export const REPORT_FORMATS = ['html', 'md'] as const;
+export type ReportFormat = (typeof REPORT_FORMATS)[number];
+
+/** Options `report` adds to the command line. */
+export const REPORT_CLI_OPTIONS = {
+  out: { type: 'string' },
+  format: { type: 'string' },
+} as const;
+
+/** Options of `report`. */
+export interface ReportCommandOptions {
+  file: string;
+  out?: string;
+  format: ReportFormat;
+}
+
+/**
+ * Reads `report`'s options; the format defaults to Markdown for an --out
+ * ending in .md, HTML otherwise.
+ * @throws InputError at --format for a format other than html or md.
+ */
+export function reportOptionsFromArgs(file: string, values: { out?: string; format?: string }): ReportCommandOptions {
+  const format = values.format ?? (values.out?.toLowerCase().endsWith('.md') ? 'md' : 'html');
+  if (!(REPORT_FORMATS as readonly string[]).includes(format)) throw new InputError('--format', `must be html or md, got "${format}"`);
+  return { file, out: values.out, format: format as ReportFormat };
+}
+
+/** Writes the report; returns 0 when every requirement holds, 1 when some fails, 2 for a partial budget. */
+export function reportCommand(opts: ReportCommandOptions, io: Io): number {
+  const loaded = loadBudget(opts.file);
+  for (const note of loaded.notes) io.err(`${loaded.fileName}: ${note}\n`);
+  const problems = sheetProblems(loaded);
+  for (const p of problems) io.err(`${p}\n`);
+  if (loaded.sheet.blocked) return EXIT.badInput;
+  const documentSha256 = createHash('sha256').update(readFileSync(opts.file)).digest('hex');
+  const report = withDocumentPaths(loaded, () => buildReviewReport(loaded.document, { fileName: opts.file, documentSha256, toolVersion: TOOL_VERSION }));
+  const text = opts.format === 'md' ? renderReviewMarkdown(report) : renderReviewHtml(report);
+  if (opts.out) {
+    try {
+      writeFileSync(opts.out, text);
+    } catch (e) {
+      throw new InputError('--out', `cannot write ${opts.out} (${(e as NodeJS.ErrnoException).code ?? 'error'}): check that its folder exists and is writable`);
+    }
+    io.err(`wrote ${opts.out} (${opts.format === 'md' ? 'Markdown' : 'HTML'}, ${report.sections.length} sections)\n`);
+  } else {
+    io.out(text);
+  }
+  if (problems.length) return EXIT.badInput;
+  return verdictsHold(report) ? EXIT.pass : EXIT.fail;
+}
+
+function verdictsHold(report: ReturnType<typeof buildReviewReport>): boolean {
+  const verdicts = report.sections.find((s) => s.id === 'requirements')?.blocks.find((b) => b.kind === 'table' && b.id === 'verdicts');
+  return !verdicts || verdicts.kind !== 'table' || verdicts.rows.every((r) => r[r.length - 1] === 'PASS');
+}

@@ -1,0 +1,65 @@
+/**
+ * `sigma-ledger size FILE --vary SENSOR.ROW --sweep FROM:TO:N
+ * [--requirement ID]`: the row's magnitude swept over N evenly spaced values
+ * (in the row's unit), printed as CSV: the value, then each requirement's
+ * worst value, limit and verdict. Without --requirement every requirement is
+ * read. Progress goes to stderr.
+ */
+import { InputError } from '../errors';
+import { sweepRow, sweepValues, type RowSweep } from '../budget/row-sweep';
+import { formatSignificant } from '../units';
+import { EXIT, type Io } from './commands';
+import { loadBudget, sheetProblems, withDocumentPaths } from './load-budget';
+import { checkSizingTarget } from './sizing-target';
+
+/** Options the sweep adds to the command line. */
+export const SIZE_SWEEP_CLI_OPTIONS = { sweep: { type: 'string' } } as const;
+
+/**
+ * Reads FROM:TO:N.
+ * @throws InputError at --sweep naming the expected form.
+ */
+export function parseSweep(text: string): { from: number; to: number; n: number } {
+  const parts = text.split(':');
+  const [from, to, n] = parts.map((p) => (p.trim() === '' ? NaN : Number(p)));
+  if (parts.length !== 3 || [from, to, n].some((x) => !Number.isFinite(x))) {
+    throw new InputError('--sweep', `must be FROM:TO:N in the row's unit, e.g. 0:2:21, got "${text}"`);
+  }
+  return { from, to, n };
+}
+
+/** Prints the sweep as CSV; exits 0, or 2 for bad input. */
+export function sizeSweepCommand(file: string, rowId: string, requirementId: string | undefined, sweepText: string, io: Io): number {
+  const { from, to, n } = parseSweep(sweepText);
+  const values = withSweepPath(() => sweepValues(from, to, n));
+  const loaded = loadBudget(file);
+  const problems = sheetProblems(loaded);
+  for (const p of problems) io.err(`${p}\n`);
+  if (problems.length) return EXIT.badInput;
+  if (loaded.sheet.input) checkSizingTarget(loaded.sheet.input, rowId, requirementId);
+  const sweep = withDocumentPaths(loaded, (input) =>
+    sweepRow(input, rowId, values, requirementId === undefined ? undefined : [requirementId], (done, total) => io.err(`point ${done} of ${total}\n`)));
+  io.out(sweepCsv(sweep));
+  return EXIT.pass;
+}
+
+/** The sweep as CSV with a header naming units; numbers with 6 significant digits. */
+export function sweepCsv(sweep: RowSweep): string {
+  const header = [`${sweep.sourceId} (${sweep.unit})`, ...sweep.requirements.flatMap((r) => [`${r.id} worst (${r.unit})`, `${r.id} limit (${r.unit})`, `${r.id} verdict`])];
+  const num = (x: number) => formatSignificant(x, 6);
+  const lines = sweep.points.map((p) => [num(p.value), ...sweep.requirements.flatMap((r, i) => [num(p.worst[i]), num(r.limit), p.verdicts[i]])].join(','));
+  return [header.map(csvField).join(','), ...lines, ''].join('\n');
+}
+
+function csvField(text: string): string {
+  return /[",\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
+}
+
+function withSweepPath<T>(fn: () => T): T {
+  try {
+    return fn();
+  } catch (e) {
+    if (e instanceof InputError && e.path === 'sweep') throw new InputError('--sweep', e.message.slice('sweep: '.length));
+    throw e;
+  }
+}
