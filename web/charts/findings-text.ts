@@ -1,4 +1,4 @@
-import { formatSignificant } from '../../src/units';
+import { formatSignificant } from '../../src';
 import type { OutageHoldEntry, RequirementEntry } from './result-shapes';
 
 /** A value for the findings' texts and tables: three significant digits (the unit goes beside it). */

@@ -1,5 +1,5 @@
-import type { NoiseTrace, TracedEntry } from '../../src/report/noise-trace';
-import { formatSignificant } from '../../src/units';
+import type { NoiseTrace, TracedEntry } from '../../src';
+import { formatSignificant } from '../../src';
 
 /** A ledger value: four significant digits (the unit goes beside it). */
 export const ledgerNumber = (x: number) => formatSignificant(x, 4);

@@ -1,4 +1,4 @@
-import type { JsonResult } from '../../src/report/json-result';
+import type { JsonResult } from '../../src';
 import { NEUTRAL_COLOUR, seriesColour } from '../styles/palette';
 import type { LineDataset } from './chart-controller';
 

@@ -1,5 +1,5 @@
-import type { ViewResult } from '../../src/report/view-result';
-import { convert } from '../../src/units';
+import type { ViewResult } from '../../src';
+import { convert } from '../../src';
 import { LIMIT_DASH, TOTAL_COLOUR, seriesColour } from '../styles/palette';
 import type { LineDataset } from './chart-controller';
 import { levelText, num, quantityText } from './findings-text';

@@ -1,5 +1,5 @@
 import type { ChartOptions, TooltipItem } from 'chart.js';
-import { formatSignificant } from '../../src/units';
+import { formatSignificant } from '../../src';
 import type { OutageBand } from './outage-bands';
 
 /** What differs between the findings' time plots. */

@@ -1,10 +1,10 @@
 import { LitElement, css, html, nothing, type PropertyValues } from 'lit';
 import { customElement, property, state } from 'lit/decorators.js';
-import type { BudgetDocument, SensorEntry, SourceRow } from '../../src/document';
-import type { SourceKind } from '../../src/inputs/budget-input';
-import type { ViewResult } from '../../src/report/view-result';
-import { SENSOR_KINDS } from '../../src/sensors/registry';
-import { SOURCE_KINDS } from '../../src/sources/registry';
+import type { BudgetDocument, SensorEntry, SourceRow } from '../../src';
+import type { SourceKind } from '../../src';
+import type { ViewResult } from '../../src';
+import { SENSOR_KINDS } from '../../src';
+import { SOURCE_KINDS } from '../../src';
 import type { DocumentStore } from '../state/document-store';
 import { moveInGrid, type GridMove, type GridPosition } from '../grid/grid-navigation';
 import { editorStyles } from '../grid/editor-styles';

@@ -4,12 +4,12 @@
  * the fields that no longer apply removed, renames that rewrite formulas,
  * new and duplicated sensors.
  */
-import type { BudgetDocument, SensorEntry, SourceRow } from '../../src/document';
-import type { SensorKind, SourceKind } from '../../src/inputs/budget-input';
-import { unitDimension } from '../../src/units';
-import { uniqueId } from '../../src/edits/ids';
-import { renameRowReferences, renameSensorReferences } from '../../src/edits/references';
-import { defaultUnit, kindTakes, rowDimensions } from '../../src/edits/unit-choices';
+import type { BudgetDocument, SensorEntry, SourceRow } from '../../src';
+import type { SensorKind, SourceKind } from '../../src';
+import { unitDimension } from '../../src';
+import { uniqueId } from '../../src';
+import { renameRowReferences, renameSensorReferences } from '../../src';
+import { defaultUnit, kindTakes, rowDimensions } from '../../src';
 
 /** The correlation time a bias-instability row gets when nobody knows it: 100 s (FORMAT.md, common practice). */
 export const ASSUMED_CORRELATION_TIME_S = 100;
