@@ -6,5 +6,7 @@ export default defineConfig({
     include: ['test/**/*.test.ts'],
     exclude: ['test/web/**', 'node_modules/**'],
     environment: 'node',
+    // Generous: the machines are shared, and a loaded core runs a whole-mission test several times slower.
+    testTimeout: 60_000,
   },
 });
