@@ -6,7 +6,7 @@ import type { ViewResult } from '../../src';
 import { SENSOR_KINDS } from '../../src';
 import { SOURCE_KINDS } from '../../src';
 import type { DocumentStore } from '../state/document-store';
-import { moveInGrid, type GridMove, type GridPosition } from '../grid/grid-navigation';
+import type { GridMove, GridPosition } from '../grid/grid-navigation';
 import { editorStyles } from '../grid/editor-styles';
 import { PASTE_COLUMNS } from '../grid/paste-rows';
 import { presentColumns, SOURCE_COLUMNS } from '../grid/source-columns';

@@ -56,7 +56,7 @@ export function usableColumns(columns: readonly string[]): string[] {
 
 /** The time unit a column name suggests ("time_ms" -> ms), else s. Throws nothing. */
 export function guessTimeUnit(column: string | undefined): string {
-  if (column && /(^|[_\s(\[])ms[)\]]?$/i.test(column.trim())) return 'ms';
-  if (column && /(^|[_\s(\[])min[)\]]?$/i.test(column.trim())) return 'min';
+  if (column && /(^|[_\s([])ms[)\]]?$/i.test(column.trim())) return 'ms';
+  if (column && /(^|[_\s([])min[)\]]?$/i.test(column.trim())) return 'min';
   return 's';
 }
