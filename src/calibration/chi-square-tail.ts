@@ -6,6 +6,7 @@
  * 1 − P keeps about 15 significant digits. (@stdlib's gammainc has an exact
  * upper tail but brings about 200 packages, 22 MB, into every install.)
  */
+/// <reference path="./jstat.d.ts" />
 import jstat from 'jstat';
 import { InputError } from '../errors';
 
