@@ -46,9 +46,54 @@ export {
   type ReviewReport, type ReportProvenance, type SizingRequest, type SectionBuilder, type LineChart,
 } from './report/review';
 export { linearTicks, formatTickValues, type AxisTicks } from './report/tick-labels';
-export { serializeBudgetDocument, parseBudgetDocument, type BudgetDocument } from './document';
 export { sizableRowIds, requirementsWith } from './budget/sizing';
 export { sweepRow, sweepValues, type RowSweep, type SweepPoint } from './budget/row-sweep';
 export { longestOutage, requirementsWithOutage, outageSpan, type OutageLimit, type OutageRef } from './budget/outage-sizing';
-export { evaluateBudgetDocument } from './sheet';
 export { formatToTolerance } from './report/tolerance-text';
+
+// One function from document to result, for the command line, the page's worker and library users.
+export { analyseDocument, type AnalyseOptions, type AnalysisBlock, type DocumentAnalysis } from './analyse-document';
+export { analyseParsedDocument } from './analyse-parsed-document';
+
+// Budget documents: types, parsing with validation, canonical writing, paths into them.
+export * from './document';
+export { getAtPath, joinSteps, setAtPath, splitPath } from './document/document-path';
+export { BudgetWorkbook, evaluateBudgetDocument, documentPathOf } from './sheet';
+export type { CellError, CellErrorKind, CellLocation, OmittedItem, SheetEvaluation } from './sheet';
+
+// Reports: the JSON result (its entry types prefixed Result: the document has its own CheckpointEntry and
+// RequirementEntry), the text summary, the caution, the page's view of a result.
+export {
+  buildJsonResult, keptSteps, type JsonResult, type CheckpointBudgetEntry, type OutageHoldEntry,
+  type CheckpointEntry as ResultCheckpointEntry, type RequirementEntry as ResultRequirementEntry,
+} from './report/json-result';
+export { jsonChunks, type JsonChunkOptions } from './report/json-chunks';
+export { formatSummary } from './report/text-summary';
+export type { NoiseTrace, TracedEntry, TracedPiece } from './report/noise-trace';
+export { CAUTION } from './report/caution';
+export { computeView, viewFromSheet, MAX_CHART_POINTS, type ViewResult, type PlanView, type RequirementCurve } from './report/view-result';
+export { ViewSession } from './report/view-session';
+
+// Edits of a document shared by the page and the command line.
+export { allanCandidates, type TermCandidate, type TermMethod, type WritableTermId } from './edits/allan-rows';
+export { calibrationCandidates, whitenessClause, type CalibrationCandidate } from './edits/calibration-rows';
+export { cellText, formatValue, isFormula, readCellText } from './edits/cell-text';
+export { changeUnit } from './edits/change-unit';
+export { idProblem, isTaken, sensorIdProblem, uniqueId, valueNameProblem } from './edits/ids';
+export { ALLAN_TARGET_KIND, CALIBRATION_TARGET_KIND, sensorsOfKind, type TargetSensor } from './edits/log-targets';
+export { isoDate } from './edits/provenance-text';
+export { renameRowReferences, renameSensorReferences, renameValueReferences } from './edits/references';
+export { sameSourceRows, writeRows, type RowPlan, type WrittenRow } from './edits/row-writer';
+export { ALL_UNITS, defaultUnit, kindTakes, rowDimensions, unitGroups } from './edits/unit-choices';
+
+// Sensor logs: Allan deviation and IEEE Std 952 terms, calibration against truth.
+export type { NoiseTermRow } from './allan/allan-analysis';
+export { analyseLogColumn, resolveLogKind, type LogAllanResult } from './allan/log-allan';
+export { detectDelimiter, readHeader } from './allan/log-header';
+export type { LogParseOptions, SensorLogTable } from './allan/log-table';
+export { termDeviation } from './allan/noise-terms';
+export { MAX_LINE_CHARS, SensorLogReader } from './allan/parse-log';
+export { ALLAN_SENSOR_KINDS, SENSOR_TERM_UNITS, type AllanSensorKind } from './allan/sensor-term-units';
+export { calibrationReport, checkCalibrationUnit, type CalibrationReport } from './calibration/calibration-report';
+export { fitOffsetAndScaleFactor } from './calibration/linear-calibration';
+export { checkResidualWhiteness } from './calibration/residual-whiteness';

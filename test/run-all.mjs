@@ -1,9 +1,12 @@
 #!/usr/bin/env node
-// `npm test`: type checks, the Node tests (vitest), the browser tests
-// (web-test-runner in Debian's Chromium), then one closing line
-// "N passed, N failed" so CI's record shows the count.
+// `npm test`: type checks, the Node tests (vitest), the packed package
+// installed and used elsewhere, the browser tests (web-test-runner in Debian's
+// Chromium), then one closing line "N passed, N failed" so CI's record shows
+// the count. Every stage's failures count there, including a stage that
+// could not start (a runner that dies before reporting counts as one failure).
 import { spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync } from 'node:fs';
+import { packCheck } from './tools/pack-check.mjs';
 
 let passed = 0, failed = 0, ok = true;
 const run = (cmd, args, opts = {}) => spawnSync(cmd, args, { stdio: 'inherit', ...opts }).status ?? 1;
@@ -21,10 +24,18 @@ try {
   const report = JSON.parse(readFileSync('.test-results/vitest.json', 'utf8'));
   passed += report.numPassedTests;
   failed += report.numFailedTests;
+  // A file that fails to load has no failed test but a failed suite.
+  if (vitest !== 0 && report.numFailedTests === 0) failed += Math.max(1, report.numFailedTestSuites ?? 0);
 } catch {
   failed += 1;
 }
 if (vitest !== 0) ok = false;
+
+console.log('\n== package (npm pack, install the tarball elsewhere, run the CLI and one import)');
+const pack = packCheck();
+passed += pack.passed;
+failed += pack.failed;
+if (pack.failed) ok = false;
 
 console.log('\n== browser tests (web-test-runner, Chromium)');
 const chrome = ensureChromium();
@@ -39,6 +50,7 @@ if (!chrome) {
   if (counts) {
     passed += Number(counts[1]);
     failed += Number(counts[2]);
+    if (wtr.status !== 0 && Number(counts[2]) === 0) failed += 1;
   } else {
     failed += 1;
   }

@@ -1,4 +1,4 @@
-import type { BudgetDocument } from '../src/document';
+import type { BudgetDocument } from '../src';
 import orchard from '../budgets/orchard-rover.json';
 import harbour from '../budgets/harbour-launch.json';
 import warehouse from '../budgets/warehouse-tug.json';

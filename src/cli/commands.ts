@@ -1,17 +1,10 @@
-import { writeFileSync } from 'node:fs';
-import { computeBudget, MAX_STEPS } from '../pipeline';
-import type { BudgetInput } from '../inputs/budget-input';
-import { quantityToSI } from '../inputs/checks';
-import { resolveMission } from '../mission/resolve-mission';
-import { sizeSource, type SizingResult } from '../budget/sizing';
+/**
+ * What every command shares: exit codes, the output streams, turning an
+ * input error into one line on stderr, and writing output to stdout or a file piece by piece. Each command is in
+ * its own file (run-command.ts, size-command.ts, ...), listed in command-table.ts.
+ */
+import { closeSync, openSync, writeSync } from 'node:fs';
 import { InputError, SigmaLedgerError } from '../errors';
-import { formatSummary } from '../report/text-summary';
-import { buildJsonResult } from '../report/json-result';
-import { formatSignificant } from '../units';
-import { loadBudget, sheetProblems, withDocumentPaths, type LoadedBudget } from './load-budget';
-import { filterDesignReport } from './filter-design-report';
-import { checkSizingTarget } from './sizing-target';
-import { formatToTolerance } from '../report/tolerance-text';
 
 /** Exit codes: every requirement holds, some requirement fails, bad input. */
 export const EXIT = { pass: 0, fail: 1, badInput: 2 } as const;
@@ -38,106 +31,36 @@ export interface Io {
   err: (text: string) => void;
 }
 
-/** Options of `run`. */
-export interface RunOptions {
-  json: boolean;
-  every: number;
-  output?: string;
-}
+/** Characters written between pauses, so that a closed pipe (`| head`) is noticed while writing. */
+const PAUSE_EVERY_CHARS = 1 << 20;
 
 /**
- * `run FILE`: the summary (or JSON) of a budget. A budget with cell errors is
- * still computed where it can be, marked partial, and exits 2: its verdicts
- * leave out the failed rows and cannot be trusted.
+ * Writes text pieces to `io.out`, or to the file `output` when given, one by
+ * one (never joined into one string).
+ * @throws InputError naming `--output` when the file cannot be written.
  */
-export function runCommand(file: string, opts: RunOptions, io: Io): number {
-  const loaded = loadBudget(file);
-  const problems = reportProblems(loaded, io);
-  if (loaded.sheet.blocked) return EXIT.badInput;
-  const started = Date.now();
-  const { result, design } = withDocumentPaths(loaded, (input) => {
-    announceLongRun(input, io);
-    const result = computeBudget(input);
-    return { result, design: filterDesignReport(input, result) };
-  });
-  if (Date.now() - started > 2000) io.err(`computed ${result.trajectory.tS.length} steps in ${((Date.now() - started) / 1000).toFixed(1)} s\n`);
-  const title = loaded.document.title + (problems ? ' (PARTIAL: cells with errors were left out)' : '');
-  const text = opts.json
-    ? JSON.stringify({ ...buildJsonResult(result, title, opts.every), ...(design && { filterDesign: design.json(opts.every) }) }) + '\n'
-    : formatSummary(result, { title, fileName: file }) + (design ? `\n${design.text()}` : '');
-  if (opts.output) writeOutput(opts.output, text);
-  else io.out(text);
-  if (problems) return EXIT.badInput;
-  // With a filter design the verdict is the actual error's, not the optimal filter's.
-  const holds = design ? design.holds : result.requirements.every((r) => r.verdict === 'pass');
-  return holds ? EXIT.pass : EXIT.fail;
-}
-
-/** `size FILE --requirement ID --vary ROW`: the largest allowable value of one row. */
-export function sizeCommand(file: string, requirementId: string, rowId: string, tolerance: number, json: boolean, io: Io): number {
-  const loaded = loadBudget(file);
-  if (reportProblems(loaded, io)) return EXIT.badInput;
-  const result = withDocumentPaths(loaded, (input) => {
-    checkSizingTarget(input, rowId, requirementId);
-    return sizeSource(input, requirementId, rowId, {
-      relativeTolerance: tolerance,
-      onTrial: (n, value, verdict) => io.err(`trial ${n}: ${rowId} = ${formatSignificant(value, 6)} -> ${verdict}\n`),
-    });
-  });
-  io.out(json ? JSON.stringify(result) + '\n' : formatSizing(result));
-  return result.outcome === 'never-passes' ? EXIT.fail : EXIT.pass;
-}
-
-/** `check FILE`: validate and evaluate the cells without running the analysis. */
-export function checkCommand(file: string, io: Io): number {
-  const loaded = loadBudget(file);
-  if (reportProblems(loaded, io)) return EXIT.badInput;
-  withDocumentPaths(loaded, (input) => computeBudget(input));
-  io.out(`${file}: valid (${loaded.sheet.cellValues.size} cells evaluated)\n`);
-  return EXIT.pass;
-}
-
-function writeOutput(path: string, text: string): void {
+export async function writePieces(pieces: Iterable<string>, io: Io, output?: string): Promise<void> {
+  const fd = output === undefined ? undefined : openOutput(output);
+  const write = fd === undefined ? io.out : (text: string) => writeSync(fd, text);
   try {
-    writeFileSync(path, text);
+    let sincePause = 0;
+    for (const piece of pieces) {
+      write(piece);
+      sincePause += piece.length;
+      if (sincePause > PAUSE_EVERY_CHARS) {
+        sincePause = 0;
+        await new Promise((resolve) => setImmediate(resolve));
+      }
+    }
+  } finally {
+    if (fd !== undefined) closeSync(fd);
+  }
+}
+
+function openOutput(path: string): number {
+  try {
+    return openSync(path, 'w');
   } catch (e) {
     throw new InputError('--output', `cannot write ${path} (${(e as NodeJS.ErrnoException).code ?? 'error'}): check that its folder exists and is writable`);
-  }
-}
-
-/** Steps above which `run` says on stderr that it is working (about a second of computing). */
-const LONG_RUN_STEPS = 50_000;
-
-function announceLongRun(input: BudgetInput, io: Io): void {
-  try {
-    const steps = resolveMission(input.mission).durationS / quantityToSI(input.step, 'time', 'step');
-    if (steps > LONG_RUN_STEPS && steps <= MAX_STEPS) io.err(`computing ${Math.ceil(steps)} steps with ${input.sensors.reduce((a, s) => a + s.sources.length, 2)} sources...\n`);
-  } catch {
-    // computeBudget reports the problem with its path.
-  }
-}
-
-function reportProblems(loaded: LoadedBudget, io: Io): boolean {
-  for (const note of loaded.notes) io.err(`${loaded.fileName}: ${note}\n`);
-  const problems = sheetProblems(loaded);
-  for (const p of problems) io.err(`${p}\n`);
-  return problems.length > 0;
-}
-
-function formatSizing(r: SizingResult): string {
-  const at = (x: SizingResult['atLargestPassing']) => (x ? `${formatSignificant(x.worstValue, 5)} ${x.limit.unit} (limit ${x.limit.value} ${x.limit.unit})` : 'n/a');
-  switch (r.outcome) {
-    case 'never-passes':
-      return `${r.requirementId} fails even with ${r.sourceId} = 0 ${r.unit}: worst ${at(r.atSmallestFailing)}. Other sources must improve first.\n`;
-    case 'always-passes':
-      return `${r.requirementId} holds for every ${r.sourceId} tried, up to ${formatSignificant(r.largestPassing, 6)} ${r.unit} (${r.stoppedBecause}).\n`;
-    default:
-      const pass = formatToTolerance(r.largestPassing, r.tolerance), fail = formatToTolerance(r.smallestFailing!, r.tolerance);
-      return [
-        `largest ${r.sourceId} meeting ${r.requirementId}: ${pass.value} ${r.unit} (± ${pass.tolerance} ${r.unit}, ${r.trials} runs)`,
-        `  at ${pass.value} ${r.unit}: worst ${at(r.atLargestPassing)}`,
-        `  at ${fail.value} ${r.unit}: worst ${at(r.atSmallestFailing)}`,
-        '',
-      ].join('\n');
   }
 }

@@ -1,22 +1,31 @@
 import { readFileSync, statSync } from 'node:fs';
-import { parseBudgetDocument, MAX_TEXT_CHARS, type BudgetDocument } from '../document';
-import { evaluateBudgetDocument, documentPathOf, type SheetEvaluation } from '../sheet';
+import { MAX_TEXT_CHARS } from '../document';
+import { documentPathOf } from '../sheet';
 import { InputError, SigmaLedgerError } from '../errors';
 import type { BudgetInput } from '../inputs/budget-input';
+import { analyseDocument, type AnalyseOptions, type DocumentAnalysis } from '../analyse-document';
+import type { Io } from './commands';
 
-/** A budget file read, validated and evaluated. */
-export interface LoadedBudget {
+/** The operand that reads the budget from standard input. */
+export const STDIN_OPERAND = '-';
+
+/** A budget file read and analysed (as far as `analyseDocument` got), with the name messages start with. */
+export interface LoadedBudget extends DocumentAnalysis {
+  /** The file's path, or `stdin` for `-`. */
   fileName: string;
-  document: BudgetDocument;
-  notes: string[];
-  sheet: SheetEvaluation;
 }
 
 /**
- * Reads a budget file and evaluates its cells.
+ * Reads a budget file (`-`: standard input) and analyses it.
  * @throws InputError naming the file for an unreadable, oversize or malformed file.
  */
-export function loadBudget(fileName: string): LoadedBudget {
+export function loadBudget(file: string, options: AnalyseOptions = {}): LoadedBudget {
+  const fileName = file === STDIN_OPERAND ? 'stdin' : file;
+  const text = file === STDIN_OPERAND ? readStdin() : readBudgetText(file);
+  return { ...analyseDocument(text, { ...options, name: fileName }), fileName };
+}
+
+function readBudgetText(fileName: string): string {
   let size: number;
   try {
     const stat = statSync(fileName);
@@ -28,9 +37,16 @@ export function loadBudget(fileName: string): LoadedBudget {
   }
   // Bytes >= characters for UTF-8, so this refuses before reading anything huge.
   if (size > 4 * MAX_TEXT_CHARS) throw new InputError(fileName, `is ${size} bytes; a budget file may have at most ${MAX_TEXT_CHARS} characters`);
-  const text = readFileSync(fileName, 'utf8');
-  const { document, notes } = parseBudgetDocument(text, fileName);
-  return { fileName, document, notes, sheet: evaluateBudgetDocument(document) };
+  return readFileSync(fileName, 'utf8');
+}
+
+function readStdin(): string {
+  try {
+    // The parser refuses text over MAX_TEXT_CHARS with its own message.
+    return readFileSync(0, 'utf8');
+  } catch (e) {
+    throw new InputError('stdin', `cannot be read (${(e as NodeJS.ErrnoException).code ?? 'error'}): pipe a budget into it, e.g. cat budget.json | sigma-ledger run -`);
+  }
 }
 
 /** Lines describing every cell error and omitted item, each with its location. */
@@ -42,6 +58,15 @@ export function sheetProblems(loaded: LoadedBudget): string[] {
   }
   for (const o of loaded.sheet.omitted) lines.push(`${loaded.fileName}: ${o.path}: left out of the analysis (${o.what})`);
   return lines;
+}
+
+/**
+ * Throws the analysis's engine input error, if any, with the file name and the document path.
+ * @throws InputError naming the file and the document path.
+ */
+export function throwIfBlocked(loaded: LoadedBudget): void {
+  const b = loaded.blocked;
+  if (b) throw new InputError(`${loaded.fileName}${b.path ? `: ${b.path}` : ''}`, b.message);
 }
 
 /** Runs an engine call, turning an engine input error's path into the document's path and prefixing the file name. */
@@ -58,4 +83,12 @@ export function withDocumentPaths<T>(loaded: LoadedBudget, fn: (input: BudgetInp
     }
     throw e;
   }
+}
+
+/** Prints a loaded budget's migration notes, cell errors and omitted items; true when there were problems. */
+export function reportProblems(loaded: LoadedBudget, io: Io): boolean {
+  for (const note of loaded.notes) io.err(`${loaded.fileName}: ${note}\n`);
+  const problems = sheetProblems(loaded);
+  for (const p of problems) io.err(`${p}\n`);
+  return problems.length > 0;
 }

@@ -1,153 +1,95 @@
+/**
+ * The command line: finds the command in command-table.ts, checks the
+ * arguments against the options it declares, and runs it. `--help` and
+ * `--version` answer without loading the engine.
+ */
 import { parseArgs } from 'node:util';
+import { closest, distance } from 'fastest-levenshtein';
 import { SigmaLedgerError } from '../errors';
-import { CAUTION } from '../report/caution';
-import { checkCommand, EXIT, runCommand, sizeCommand, type Io } from './commands';
-import { ALLAN_CLI_OPTIONS, allanCommand, allanOptionsFromArgs } from './allan-command';
-import { CALIBRATE_CLI_OPTIONS, calibrateCommand, calibrateOptionsFromArgs } from './calibrate-command';
-import { INTO_CLI_OPTIONS } from './write-into-budget';
-import { SENSITIVITY_CLI_OPTIONS, sensitivityCommand } from './sensitivity-command';
-import { rSweepCommand } from './r-sweep-command';
-import { SIMULATE_CLI_OPTIONS, simulateCommand, simulateOptionsFromArgs } from './simulate-command';
-import { mergeCommand } from './merge-command';
-import { REPORT_CLI_OPTIONS, reportCommand, reportOptionsFromArgs } from './report-command';
-import { SIZE_SWEEP_CLI_OPTIONS, sizeSweepCommand } from './size-sweep';
-
-const USAGE = `sigma-ledger: sensor error budgets by covariance analysis
-
-usage:
-  sigma-ledger run FILE [--json] [--every N] [--output OUT]
-      the budget's summary: requirement verdicts, margins, time to exceed per
-      outage, budgets at checkpoints, the R, Q and P0 used; --json prints the
-      full result (series thinned to every N-th step with --every)
-  sigma-ledger size FILE --requirement ID --vary SENSOR.ROW [--tolerance REL] [--json]
-      the largest value of one row's magnitude that still meets a requirement,
-      printed to the tolerance's precision
-  sigma-ledger size FILE --vary SENSOR.ROW --sweep FROM:TO:N [--requirement ID]
-      the curve instead: N values from FROM to TO (the row's unit) as CSV, with
-      each requirement's worst value, limit and verdict
-  sigma-ledger report FILE [--out PATH] [--format html|md]
-      the design-review report: one self-contained HTML file (or Markdown) with
-      the scenario, verdicts, charts, budgets, every row and every R, Q and P0
-      entry traced to its row, the assumed values and the file's SHA-256
-  sigma-ledger check FILE
-      validate the file and evaluate its cells without running the analysis
-  sigma-ledger allan LOG --column NAME --unit UNIT [--time-column NAME] [--time-unit U]
-                     [--rate HZ] [--kind gyro|accelerometer|speed] [--gap-tolerance REL] [--json]
-      overlapping Allan deviation of a static log (CSV or TSV) and its IEEE Std 952
-      noise terms, read off by slope and fitted over the whole curve; with
-      --into BUDGET --sensor ID [--terms slope|fit] the terms are written into
-      that sensor's rows with "fitted from LOG, DATE, N samples" as provenance
-  sigma-ledger calibrate LOG --measured NAME --truth NAME --unit UNIT [--json]
-      offset and scale factor of a sensor against known truth, by least squares;
-      with --into BUDGET --sensor ID their uncertainties go into the sensor's
-      turn-on-bias and scale-factor rows
-
-  sigma-ledger sensitivity FILE [--rows SENSOR.ROW,...] [--range LOW,HIGH] [--json]
-      every value marked assumed (and the rows given) scaled from x0.5 to x2 (or
-      the range given): the change in each requirement's worst value, ranked
-  sigma-ledger r-sweep FILE --sensor ID [--json]
-      the sensor's R in the filter scaled from x0.1 to x10: each requirement's
-      actual and believed worst value (rows with "tuning" keep their design)
-  sigma-ledger simulate FILE --runs N [--seed S] [--workers W] [--json] [--every K] [--output OUT]
-      Monte Carlo check of the linearised budget: RMS error beside the predicted
-      sigma with its 95 % band, average NEES with its 95 % bounds, and where the
-      covariance is optimistic; parallel over the machine's cores; exit 1 with warnings
-  sigma-ledger simulate FILE --runs N [--seed S] --shard I/N|auto/N [--output PART]
-      only shard I of N (0-based; auto reads JOB_COMPLETION_INDEX or
-      SLURM_ARRAY_TASK_ID) and write a part file
-  sigma-ledger merge PARTS... [--json] [--every K] [--output OUT]
-      combine the parts into exactly the one-machine result
-
-With rows that carry a filter design ("tuning"), run also reports what the
-filter believes against its actual error, and its verdicts are the actual error's.
-
-exit codes: 0 every requirement holds, 1 some requirement fails, 2 bad input
-
-${CAUTION}
-`;
-
-const OPTIONS = {
-  json: { type: 'boolean', default: false },
-  every: { type: 'string' },
-  output: { type: 'string' },
-  requirement: { type: 'string' },
-  vary: { type: 'string' },
-  tolerance: { type: 'string' },
-  help: { type: 'boolean', default: false },
-  ...ALLAN_CLI_OPTIONS,
-  ...CALIBRATE_CLI_OPTIONS,
-  ...INTO_CLI_OPTIONS,
-  ...SENSITIVITY_CLI_OPTIONS,
-  ...SIMULATE_CLI_OPTIONS,
-  ...REPORT_CLI_OPTIONS,
-  ...SIZE_SWEEP_CLI_OPTIONS,
-} as const;
+import { EXIT, type Io } from './commands';
+import { UsageError, type CliCommand, type CliOption } from './cli-command';
+import { COMMANDS } from './command-table';
+import { commandHelp, mainHelp, optionList } from './command-help';
+import { packageVersion } from './package-version';
 
 /** Runs the command line; returns the exit code. Messages for bad input go to `io.err`, never as a stack trace. */
 export async function main(argv: string[], io: Io = processIo()): Promise<number> {
+  const [first, ...rest] = argv;
+  if (first === '--version' || first === '-V') {
+    io.out(`sigma-ledger ${packageVersion()}\n`);
+    return EXIT.pass;
+  }
+  if (first === undefined) {
+    io.err(mainHelp());
+    return EXIT.badInput;
+  }
+  if (first === '--help' || first === '-h' || (first === 'help' && rest.length === 0)) {
+    io.out(mainHelp());
+    return EXIT.pass;
+  }
+  const name = first === 'help' ? rest[0] : first;
+  const entry = COMMANDS.find((c) => c.name === name);
+  if (!entry) {
+    const names = COMMANDS.map((c) => c.name);
+    const hint = name.startsWith('-') ? '' : `; did you mean "${closest(name, names)}"?`;
+    return usageError(io, `unknown command "${name}"${hint} (commands: ${names.join(', ')})`);
+  }
   try {
-    const { values, positionals } = parseArgs({ args: argv, options: OPTIONS, allowPositionals: true });
-    const [command, file, ...extra] = positionals;
-    if (values.help || command === 'help') {
-      io.out(USAGE);
+    const command = await entry.load();
+    if (first === 'help' || rest.includes('--help') || rest.includes('-h')) {
+      io.out(commandHelp(entry.name, command));
       return EXIT.pass;
     }
-    if (command === undefined) {
-      io.err(USAGE);
-      return EXIT.badInput;
-    }
-    if (!file) return usageError(io, `"${command}" needs a file`);
-    if (command === 'merge') return await mergeCommand([file, ...extra], { json: values.json, every: positiveNumber(values.every, '--every', 1), output: values.output }, io);
-    if (extra.length) return usageError(io, `unexpected argument "${extra[0]}"`);
-    switch (command) {
-      case 'run':
-        return runCommand(file, { json: values.json, every: positiveNumber(values.every, '--every', 1), output: values.output }, io);
-      case 'size':
-        if (values.sweep !== undefined && values.vary) return sizeSweepCommand(file, values.vary, values.requirement, values.sweep, io);
-        if (!values.requirement || !values.vary) return usageError(io, 'size needs --requirement ID and --vary SENSOR.ROW');
-        return sizeCommand(file, values.requirement, values.vary, relativeTolerance(values.tolerance), values.json, io);
-      case 'check':
-        return checkCommand(file, io);
-      case 'report':
-        return reportCommand(reportOptionsFromArgs(file, values), io);
-      case 'allan':
-        return await allanCommand(allanOptionsFromArgs(file, values), io);
-      case 'calibrate':
-        return await calibrateCommand(calibrateOptionsFromArgs(file, values), io);
-      case 'sensitivity':
-        return sensitivityCommand(file, values, io);
-      case 'r-sweep':
-        return rSweepCommand(file, values, io);
-      case 'simulate':
-        return await simulateCommand(simulateOptionsFromArgs(file, values, process.env), io);
-      default:
-        return usageError(io, `unknown command "${command}"; use run, size, report, check, allan, calibrate, simulate, merge, sensitivity or r-sweep`);
-    }
+    const { operands, values } = parseCommandLine(entry.name, command, rest);
+    return await command.run(operands, values, io);
   } catch (e) {
+    if (e instanceof UsageError) return usageError(io, e.message, entry.name);
     if (e instanceof SigmaLedgerError) {
       io.err(`error: ${e.message}\n`);
       return EXIT.badInput;
     }
-    if (e instanceof TypeError && 'code' in e && String(e.code).startsWith('ERR_PARSE_ARGS')) return usageError(io, e.message);
     throw e;
   }
 }
 
-function positiveNumber(text: string | undefined, option: string, fallback: number): number {
-  if (text === undefined) return fallback;
-  const v = Number(text);
-  if (!(v > 0) || !Number.isFinite(v)) throw new SigmaLedgerError(option, `must be a positive number, got "${text}"`);
-  return v;
+/**
+ * Checks `args` against the command's options and operands.
+ * @throws UsageError for an option the command does not take (listing those it
+ *   does, with "did you mean" for a near miss), a missing option value, or a
+ *   wrong number of operands.
+ */
+export function parseCommandLine(name: string, command: CliCommand, args: string[]): { operands: string[]; values: Record<string, string | boolean | undefined> } {
+  const options: Record<string, CliOption> = { ...command.options, help: { type: 'boolean' } };
+  const loose = parseArgs({ args, options, allowPositionals: true, strict: false, tokens: true });
+  for (const token of loose.tokens ?? []) {
+    if (token.kind !== 'option' || token.name in options) continue;
+    const known = Object.keys(command.options);
+    const near = known.length ? closest(token.name, known) : undefined;
+    const hint = near && isNear(token.name, near) ? `; did you mean --${near}?` : '';
+    throw new UsageError(`${name} has no option ${token.rawName}${hint}\n${name} takes: ${optionList(command)}`);
+  }
+  let parsed;
+  try {
+    parsed = parseArgs({ args, options, allowPositionals: true, strict: true });
+  } catch (e) {
+    if (e instanceof TypeError && 'code' in e && String(e.code).startsWith('ERR_PARSE_ARGS')) throw new UsageError(e.message);
+    throw e;
+  }
+  const operands = parsed.positionals;
+  const wanted = command.operands;
+  if (operands.length < wanted.length) throw new UsageError(`"${name}" needs ${wanted.length === 1 ? 'a file' : wanted.join(' ')}`);
+  if (command.variadic && operands.length === wanted.length) throw new UsageError(`"${name}" needs ${command.variadic}`);
+  if (!command.variadic && operands.length > wanted.length) throw new UsageError(`unexpected argument "${operands[wanted.length]}"`);
+  return { operands, values: parsed.values };
 }
 
-function relativeTolerance(text: string | undefined): number {
-  const v = positiveNumber(text, '--tolerance', 1e-3);
-  if (v >= 0.5) throw new SigmaLedgerError('--tolerance', `is a relative width and must be below 0.5 (e.g. 0.001), got "${text}"`);
-  return v;
+/** True when `guess` is close enough to `typed` to suggest: one starts the other, or at most a third of its letters differ (Levenshtein distance). */
+function isNear(typed: string, guess: string): boolean {
+  return guess.startsWith(typed) || typed.startsWith(guess) || distance(typed, guess) <= Math.max(1, Math.floor(guess.length / 3));
 }
 
-function usageError(io: Io, message: string): number {
-  io.err(`error: ${message}\n(see sigma-ledger help)\n`);
+function usageError(io: Io, message: string, command?: string): number {
+  io.err(`error: ${message}\n(see sigma-ledger help${command ? ` ${command}` : ''})\n`);
   return EXIT.badInput;
 }
 

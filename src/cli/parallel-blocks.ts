@@ -5,7 +5,10 @@ import type { MonteCarloModel } from '../simulation/monte-carlo-model';
 import { runBlocks, type BlockRange } from '../simulation/run-blocks';
 import type { WorkerJob } from './simulate-worker';
 
-const WORKER_URL = new URL('./simulate-worker.mjs', import.meta.url);
+// Compiled (dist/, plain node): the worker's own .js. From source (tsx, vitest): a launcher that registers tsx first.
+const WORKER_URL = import.meta.url.endsWith('.js')
+  ? new URL('./simulate-worker.js', import.meta.url)
+  : new URL('./simulate-worker.mjs', import.meta.url);
 
 /**
  * Simulates a block range over `workers` threads, each a contiguous share of

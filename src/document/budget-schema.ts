@@ -4,7 +4,7 @@
  * and its compiled validator.
  */
 import Ajv, { type ValidateFunction } from 'ajv';
-import schemaJson from '../../budgets/budget.schema.json';
+import schemaJson from '../../budgets/budget.schema.json' with { type: 'json' };
 
 /** A JSON Schema node, as far as this code walks it. */
 export interface SchemaNode {

@@ -1,13 +1,12 @@
 import type { BudgetDocument } from '../document/budget-document';
-import { evaluateBudgetDocument, documentPathOf } from '../sheet';
+import { evaluateBudgetDocument } from '../sheet';
 import type { CellError } from '../sheet/cell-error';
 import type { OmittedItem } from '../sheet/cell-reader';
 import type { SheetEvaluation } from '../sheet/sheet-evaluation';
-import { computeBudget } from '../pipeline';
-import { SigmaLedgerError } from '../errors';
+import { analyseParsedDocument } from '../analyse-parsed-document';
 import { toSI } from '../units';
 import { requirementSeries } from './requirement-curves';
-import { buildJsonResult, keptSteps, type JsonResult } from './json-result';
+import { keptSteps, type JsonResult } from './json-result';
 import { CAUTION } from './caution';
 import { hasFilterDesign } from '../suboptimal/filter-rows';
 import { computeFilterDesign } from '../suboptimal/compute-filter-design';
@@ -54,7 +53,6 @@ export interface ViewResult {
 }
 
 /**
-/**
  * Evaluates a document's cells and runs the budget, for the page's compute
  * worker (and tests under Node): never throws for bad input; a problem comes
  * back in `blocked` or `cellErrors`. With `contributions: false` only the
@@ -66,34 +64,30 @@ export function computeView(doc: BudgetDocument, options: { contributions?: bool
 
 /** The view of a document whose cells are already evaluated (see view-session.ts, which keeps the sheet between edits). */
 export function viewFromSheet(doc: BudgetDocument, sheet: SheetEvaluation, options: { contributions?: boolean } = {}): ViewResult {
+  const a = analyseParsedDocument(doc, [], { evaluate: () => sheet, contributions: options.contributions, report: { maxPoints: MAX_CHART_POINTS } });
   const base: ViewResult = {
     title: doc.title, caution: CAUTION, cellErrors: sheet.cellErrors, omitted: sheet.omitted,
     cellValues: Object.fromEntries(sheet.cellValues), curves: [],
   };
-  if (!sheet.input) return { ...base, blocked: { message: sheet.blocked ?? 'nothing to compute' } };
-  try {
-    const r = computeBudget(sheet.input, options);
-    const every = Math.ceil(r.trajectory.tS.length / MAX_CHART_POINTS);
-    const steps = keptSteps(r.trajectory.tS.length, every);
-    const keep = (a: ArrayLike<number>) => steps.map((k) => a[k]);
-    const curves = requirementSeries(r).map((c) => ({ ...c, values: keep(c.values) }));
-    const plan: PlanView = {
-      north: keep(r.trajectory.northM), east: keep(r.trajectory.eastM), t: keep(r.trajectory.tS),
-      landmarks: sheet.input.sensors.flatMap((s) => (s.landmarks ?? []).map((l) => ({
-        sensorId: s.id, id: l.id, north: toSI(l.north.value, l.north.unit, 'length', l.id), east: toSI(l.east.value, l.east.unit, 'length', l.id),
-      }))),
-      outages: r.model.streams.flatMap((s) => s.outages.map((o) => ({ sensorId: s.sensorId, id: o.id, startS: o.startS, endS: o.endS }))),
-    };
-    const pending = options.contributions === false;
-    const result = buildJsonResult(r, doc.title, every);
-    if (hasFilterDesign(sheet.input.sensors)) {
-      const design = computeFilterDesign(sheet.input, r, { contributions: options.contributions });
-      result.filterDesign = buildFilterDesignJson(design, r.model, sheet.input, every);
-    }
-    return { ...base, result, curves, plan, ...(pending && { contributionsPending: true }) };
-  } catch (e) {
-    if (!(e instanceof SigmaLedgerError)) throw e;
-    const path = e.path ? documentPathOf(e.path, sheet.indexMap) : undefined;
-    return { ...base, blocked: { message: e.path ? e.message.slice(e.path.length + 2) : e.message, path } };
+  if (!a.budget || !a.report || !sheet.input) return { ...base, blocked: a.blocked ?? { message: 'nothing to compute' } };
+  const r = a.budget;
+  const input = sheet.input;
+  const every = Math.ceil(r.trajectory.tS.length / MAX_CHART_POINTS);
+  const steps = keptSteps(r.trajectory.tS.length, every);
+  const keep = (values: ArrayLike<number>) => steps.map((k) => values[k]);
+  const curves = requirementSeries(r).map((c) => ({ ...c, values: keep(c.values) }));
+  const plan: PlanView = {
+    north: keep(r.trajectory.northM), east: keep(r.trajectory.eastM), t: keep(r.trajectory.tS),
+    landmarks: input.sensors.flatMap((s) => (s.landmarks ?? []).map((l) => ({
+      sensorId: s.id, id: l.id, north: toSI(l.north.value, l.north.unit, 'length', l.id), east: toSI(l.east.value, l.east.unit, 'length', l.id),
+    }))),
+    outages: r.model.streams.flatMap((s) => s.outages.map((o) => ({ sensorId: s.sensorId, id: o.id, startS: o.startS, endS: o.endS }))),
+  };
+  const pending = options.contributions === false;
+  const result: JsonResult = a.report;
+  if (hasFilterDesign(input.sensors)) {
+    const design = computeFilterDesign(input, r, { contributions: options.contributions });
+    result.filterDesign = buildFilterDesignJson(design, r.model, input, every);
   }
+  return { ...base, result, curves, plan, ...(pending && { contributionsPending: true }) };
 }

@@ -83,11 +83,12 @@ describe('run --json', () => {
   });
 
   it('gives each requirement an id, a verdict, a margin and what happens in each outage', () => {
-    expect(full.requirements.length).toBeGreaterThan(0);
+    // The orchard rover's cross-track requirement fails on purpose (README: it breaks 57 s into the 90 s
+    // canopy outage); its heading requirement, 2 deg at 95 %, holds: the rover starts within 5 deg (1σ) but
+    // the window opens at 60 s, after GNSS has observed the heading.
+    expect(full.requirements.map((r) => [r.id, r.verdict])).toEqual([['alleyKeeping', 'fail'], ['heading', 'pass']]);
     for (const req of full.requirements) {
-      expect(typeof req.id).toBe('string');
-      expect(['pass', 'fail']).toContain(req.verdict);
-      expect(Number.isFinite(req.margin)).toBe(true);
+      expect(Math.sign(req.margin)).toBe(req.verdict === 'pass' ? 1 : -1);
       for (const o of req.outages) {
         expect(o.end_s).toBeGreaterThan(o.start_s);
         expect(o.timeToExceed_s === null || Number.isFinite(o.timeToExceed_s)).toBe(true);
@@ -164,7 +165,7 @@ describe('usage errors', () => {
 });
 
 describe('check and help', () => {
-  const budgets = readdirSync(BUDGETS).filter((f) => f.endsWith('.json') && f !== 'budget.schema.json');
+  const budgets = readdirSync(BUDGETS).filter((f) => f.endsWith('.json') && !f.endsWith('.schema.json'));
 
   it.each(budgets)('check finds budgets/%s valid and exits 0', async (file) => {
     const r = await runCli(['check', join(BUDGETS, file)]);

@@ -9,7 +9,7 @@ describe('the generated propagation kernel', () => {
     const uniform = seededRandom(7);
     const rand = () => uniform() - 0.5;
     for (const n of [3, 7, 11, 14]) {
-      const phiDense = new Float64Array(n * n).map((_, e) => (rand() > 0.2 ? rand() : 0));
+      const phiDense = new Float64Array(n * n).map(() => (rand() > 0.2 ? rand() : 0));
       const phi = toSparseRows(phiDense, n, reachability(phiDense, n));
       const b = new Float64Array(n * n).map(() => rand());
       const x = new Float64Array(n * n); // X = B Bᵀ, symmetric

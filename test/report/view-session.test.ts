@@ -23,7 +23,7 @@ describe('a view session that keeps the workbook between edits', () => {
     versions.push((doc = edited(doc, (d) => (d.sensors[0].sources[0].unit = 'deg/√h'))));
     versions.push((doc = edited(doc, (d) => (d.sensors[0].sources[1].value = '=noSuchName'))));
     versions.push((doc = edited(doc, (d) => d.sensors[0].sources.pop())));
-    versions.push((doc = edited(doc, (d) => (d.sensors[0].sources[1].value = 4))));
+    versions.push(edited(doc, (d) => (d.sensors[0].sources[1].value = 4)));
     for (const [i, v] of versions.entries()) {
       const kept = session.view(v);
       const fresh = computeView(v);

@@ -1,6 +1,6 @@
-import type { JsonResult } from '../../src/report/json-result';
-import { SigmaLedgerError } from '../../src/errors';
-import { convert } from '../../src/units';
+import type { JsonResult } from '../../src';
+import { SigmaLedgerError } from '../../src';
+import { convert } from '../../src';
 
 /** Calibration states that share a unit, for one plot. */
 export interface CalibrationGroup {

@@ -1,6 +1,5 @@
-import { withUnit } from '../../src/index';
-import type { NoiseTrace, TracedEntry } from '../../src/report/noise-trace';
-import { formatSignificant } from '../../src/units';
+import type { NoiseTrace, TracedEntry } from '../../src';
+import { formatSignificant, withUnit } from '../../src';
 
 /** A ledger value: four significant digits (the unit goes beside it). */
 export const ledgerNumber = (x: number) => formatSignificant(x, 4);

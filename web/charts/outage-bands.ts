@@ -15,6 +15,8 @@ export interface OutageBandOptions {
 }
 
 declare module 'chart.js' {
+  // TType must match chart.js's declaration for the interfaces to merge.
+  // eslint-disable-next-line @typescript-eslint/no-unused-vars
   interface PluginOptionsByType<TType extends ChartType> {
     /** Outage bands drawn by web/charts/outage-bands.ts. */
     slOutageBands?: OutageBandOptions;

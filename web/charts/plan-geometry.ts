@@ -1,4 +1,4 @@
-import type { PlanView } from '../../src/report/view-result';
+import type { PlanView } from '../../src';
 
 /** A point of the drawing, in SVG pixels (x right, y down). */
 export interface Px {

@@ -1,6 +1,6 @@
-import type { CheckpointEntry, JsonResult, RequirementEntry } from '../../src/report/json-result';
+import type { ResultCheckpointEntry as CheckpointEntry, JsonResult, ResultRequirementEntry as RequirementEntry } from '../../src';
 
-export type { CheckpointBudgetEntry, CheckpointEntry, OutageHoldEntry, RequirementEntry } from '../../src/report/json-result';
+export type { CheckpointBudgetEntry, ResultCheckpointEntry as CheckpointEntry, OutageHoldEntry, ResultRequirementEntry as RequirementEntry } from '../../src';
 
 /** The result's requirements (kept as a function so components read them one way). */
 export function requirementsOf(result: JsonResult): RequirementEntry[] {

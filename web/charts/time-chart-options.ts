@@ -1,6 +1,6 @@
 import type { ChartOptions, TooltipItem } from 'chart.js';
-import { formatSignificant } from '../../src/units';
 import { yTickLabels } from './y-tick-labels';
+import { formatSignificant } from '../../src';
 import type { OutageBand } from './outage-bands';
 
 /** What differs between the findings' time plots. */

@@ -1,7 +1,7 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, state } from 'lit/decorators.js';
-import { SigmaLedgerError } from '../../src/errors';
-import { CAUTION } from '../../src/report/caution';
+import { SigmaLedgerError } from '../../src';
+import { CAUTION } from '../../src';
 import { DocumentStore } from '../state/document-store';
 import { Autosave } from '../state/autosave';
 import { downloadBudget, offerDownload, readBudgetFile } from '../state/file-io';

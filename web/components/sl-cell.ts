@@ -1,7 +1,7 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property, query, state } from 'lit/decorators.js';
-import type { Cell } from '../../src/document';
-import { cellText, formatValue, isFormula, readCellText } from '../../src/edits/cell-text';
+import type { Cell } from '../../src';
+import { cellText, formatValue, isFormula, readCellText } from '../../src';
 
 /** Where the active cell goes after a commit: Enter goes down (Shift+Enter up), Tab forward or back, a click elsewhere nowhere. */
 export type CellMove = 'down' | 'up' | 'next' | 'previous' | 'none';

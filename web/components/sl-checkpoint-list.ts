@@ -1,10 +1,10 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
-import type { BudgetDocument, CheckpointEntry } from '../../src/document';
-import type { ViewResult } from '../../src/report/view-result';
+import type { BudgetDocument, CheckpointEntry } from '../../src';
+import type { ViewResult } from '../../src';
 import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
-import { idProblem, uniqueId } from '../../src/edits/ids';
+import { idProblem, uniqueId } from '../../src';
 import { blockedWithin } from '../grid/view-lookup';
 import type { CellCommitDetail } from './sl-cell';
 import './sl-cell';

@@ -23,7 +23,7 @@ export class SlCheckpointTable extends LitElement {
     table { border-collapse: collapse; width: 100%; margin-top: 8px; font-variant-numeric: tabular-nums; }
     th, td { padding: 2px 6px; text-align: left; border-bottom: 1px solid var(--sl-rule); }
     td.n, th.n { text-align: right; white-space: nowrap; }
-    tbody th { background: var(--sl-accent-soft); font-weight: 600; }
+    tbody th, td.total { background: var(--sl-accent-soft); font-weight: 600; }
     td.id { font-family: var(--sl-mono); font-size: 12px; }
     .bar { width: 120px; }
     .bar div { height: 8px; background: var(--sl-accent); border-radius: 2px; }
@@ -60,7 +60,7 @@ export class SlCheckpointTable extends LitElement {
     const rest = b.sources.length - listed.length;
     return html`
       <tbody data-quantity=${b.quantity}>
-        <tr><th>${QUANTITY_WORDS[b.quantity] ?? b.quantity}: total</th><th class="n">${num(b.sigma)} ${b.unit}</th><th class="n">100 %</th><th></th></tr>
+        <tr><th>${QUANTITY_WORDS[b.quantity] ?? b.quantity}: total</th><th class="n">${num(b.sigma)} ${b.unit}</th><th class="n">100 %</th><td class="total"></td></tr>
         ${listed.map((s) => html`
           <tr data-source=${s.id}>
             <td class="id">${s.id}</td>

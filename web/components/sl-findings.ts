@@ -1,7 +1,7 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property, state } from 'lit/decorators.js';
-import type { JsonResult } from '../../src/report/json-result';
-import type { ViewResult } from '../../src/report/view-result';
+import type { JsonResult } from '../../src';
+import type { ViewResult } from '../../src';
 import { calibrationGroups, type CalibrationGroup } from '../charts/calibration-groups';
 import { checkpointsOf } from '../charts/result-shapes';
 import { hasSigmaChart, type SigmaChartKind } from '../charts/sigma-series';

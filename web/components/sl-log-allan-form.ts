@@ -1,7 +1,7 @@
 import { LitElement, html, nothing, type PropertyValues } from 'lit';
 import { customElement, property, state } from 'lit/decorators.js';
-import type { AllanSensorKind } from '../../src/allan/sensor-term-units';
-import { DIMENSIONS } from '../../src/units';
+import type { AllanSensorKind } from '../../src';
+import { DIMENSIONS } from '../../src';
 import { editorStyles } from '../grid/editor-styles';
 import { logFormStyles } from '../logs/log-form-styles';
 import { DEFAULT_LOG_UNIT, guessTimeColumn, guessTimeUnit, KIND_LABELS, KINDS, logUnitGroups, usableColumns } from '../logs/log-form-choices';

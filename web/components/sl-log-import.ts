@@ -1,7 +1,7 @@
 import { LitElement, css, html, nothing, type PropertyValues } from 'lit';
 import { customElement, property, state } from 'lit/decorators.js';
-import type { ViewResult } from '../../src/report/view-result';
-import { formatSignificant } from '../../src/units';
+import type { ViewResult } from '../../src';
+import { formatSignificant } from '../../src';
 import { editorStyles } from '../grid/editor-styles';
 import { LogJobController } from '../logs/log-job-controller';
 import { StoreListener } from '../logs/store-listener';

@@ -1,7 +1,7 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
-import type { NoiseTermRow } from '../../src/allan/allan-analysis';
-import { formatSignificant } from '../../src/units';
+import type { NoiseTermRow } from '../../src';
+import { formatSignificant } from '../../src';
 import { editorStyles } from '../grid/editor-styles';
 import type { AllanOutcome } from '../logs/log-protocol';
 

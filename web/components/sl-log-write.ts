@@ -1,12 +1,12 @@
 import { LitElement, css, html, nothing, type PropertyValues } from 'lit';
 import { customElement, property, state } from 'lit/decorators.js';
-import type { BudgetDocument } from '../../src/document';
+import type { BudgetDocument } from '../../src';
 import { editorStyles } from '../grid/editor-styles';
-import { allanCandidates, type TermCandidate, type TermMethod, type WritableTermId } from '../../src/edits/allan-rows';
-import { sameSourceRows, type WrittenRow } from '../../src/edits/row-writer';
-import { ALLAN_TARGET_KIND, sensorsOfKind, type TargetSensor } from '../../src/edits/log-targets';
+import { allanCandidates, type TermCandidate, type TermMethod, type WritableTermId } from '../../src';
+import { sameSourceRows, type WrittenRow } from '../../src';
+import { ALLAN_TARGET_KIND, sensorsOfKind, type TargetSensor } from '../../src';
 import type { AllanOutcome } from '../logs/log-protocol';
-import { isoDate } from '../../src/edits/provenance-text';
+import { isoDate } from '../../src';
 import { writeIntoSensor } from '../logs/write-to-store';
 import type { DocumentStore } from '../state/document-store';
 import './sl-log-written';

@@ -1,7 +1,7 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
 import { editorStyles } from '../grid/editor-styles';
-import type { WrittenRow } from '../../src/edits/row-writer';
+import type { WrittenRow } from '../../src';
 
 /**
  * What a write into the grid did: each row added or overwritten, with the

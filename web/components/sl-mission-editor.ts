@@ -1,8 +1,8 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
-import type { BudgetDocument } from '../../src/document';
-import type { ViewResult } from '../../src/report/view-result';
-import type { DimensionName } from '../../src/units';
+import type { BudgetDocument } from '../../src';
+import type { ViewResult } from '../../src';
+import type { DimensionName } from '../../src';
 import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
 import { isWithin } from '../grid/view-lookup';

@@ -1,6 +1,6 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property, query, state } from 'lit/decorators.js';
-import type { NoiseTrace, TracedEntry } from '../../src/report/noise-trace';
+import type { NoiseTrace, TracedEntry } from '../../src';
 import { LEDGER_BLOCKS, noiseLedgerMarkdown, valueAndRoot } from '../charts/noise-markdown';
 
 /** Detail of `sl-ledger-copied`. */

@@ -1,8 +1,8 @@
 import { LitElement, css, html, nothing, svg } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
-import type { PlanView } from '../../src/report/view-result';
+import type { PlanView } from '../../src';
 import { planGeometry, polylinePoints, type PlanGeometry, type Px } from '../charts/plan-geometry';
-import { formatSignificant } from '../../src/units';
+import { formatSignificant } from '../../src';
 import { seriesColour } from '../styles/palette';
 
 const W = 520, H = 340, MARGIN = 34;

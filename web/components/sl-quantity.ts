@@ -1,12 +1,12 @@
 import { LitElement, css, html } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
-import type { BudgetDocument, QuantityCell } from '../../src/document';
-import { getAtPath, joinSteps, splitPath } from '../../src/document/document-path';
-import type { ViewResult } from '../../src/report/view-result';
-import type { DimensionName } from '../../src/units';
+import type { BudgetDocument, QuantityCell } from '../../src';
+import { getAtPath, joinSteps, splitPath } from '../../src';
+import type { ViewResult } from '../../src';
+import type { DimensionName } from '../../src';
 import type { DocumentStore } from '../state/document-store';
-import { changeUnit } from '../../src/edits/change-unit';
-import { defaultUnit } from '../../src/edits/unit-choices';
+import { changeUnit } from '../../src';
+import { defaultUnit } from '../../src';
 import { cellErrorAt, cellValueAt } from '../grid/view-lookup';
 import type { CellCommitDetail } from './sl-cell';
 import type { UnitChangeDetail } from './sl-unit-picker';

@@ -1,12 +1,12 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
-import type { BudgetDocument } from '../../src/document';
-import type { ViewResult } from '../../src/report/view-result';
+import type { BudgetDocument } from '../../src';
+import type { ViewResult } from '../../src';
 import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
 import { blockedWithin } from '../grid/view-lookup';
-import { LEVELS } from '../../src/budget/levels';
-import type { ConfidenceLevel } from '../../src/inputs/budget-input';
+import { LEVELS } from '../../src';
+import type { ConfidenceLevel } from '../../src';
 import './sl-checkpoint-list';
 import './sl-quantity';
 import './sl-requirement-table';

@@ -1,11 +1,11 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
-import type { BudgetDocument, SegmentEntry } from '../../src/document';
-import type { ViewResult } from '../../src/report/view-result';
-import type { DimensionName } from '../../src/units';
+import type { BudgetDocument, SegmentEntry } from '../../src';
+import type { ViewResult } from '../../src';
+import type { DimensionName } from '../../src';
 import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
-import { idProblem, uniqueId } from '../../src/edits/ids';
+import { idProblem, uniqueId } from '../../src';
 import { moveItem } from '../grid/row-edits';
 import { blockedWithin, isOmitted } from '../grid/view-lookup';
 import type { CellCommitDetail } from './sl-cell';

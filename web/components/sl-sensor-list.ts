@@ -1,12 +1,12 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property, state } from 'lit/decorators.js';
-import type { BudgetDocument } from '../../src/document';
-import type { SensorKind } from '../../src/inputs/budget-input';
-import type { ViewResult } from '../../src/report/view-result';
-import { SENSOR_KINDS, SENSOR_KIND_NAMES } from '../../src/sensors/registry';
+import type { BudgetDocument } from '../../src';
+import type { SensorKind } from '../../src';
+import type { ViewResult } from '../../src';
+import { SENSOR_KINDS, SENSOR_KIND_NAMES } from '../../src';
 import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
-import { sensorIdProblem } from '../../src/edits/ids';
+import { sensorIdProblem } from '../../src';
 import { duplicateSensor, newSensor, renameSensor } from '../grid/row-edits';
 import { blockedWithin, errorsWithin } from '../grid/view-lookup';
 import type { CellCommitDetail } from './sl-cell';

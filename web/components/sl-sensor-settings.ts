@@ -1,9 +1,9 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
-import type { BudgetDocument, SensorEntry } from '../../src/document';
-import type { ViewResult } from '../../src/report/view-result';
-import type { DimensionName } from '../../src/units';
-import { SENSOR_KINDS } from '../../src/sensors/registry';
+import type { BudgetDocument, SensorEntry } from '../../src';
+import type { ViewResult } from '../../src';
+import type { DimensionName } from '../../src';
+import { SENSOR_KINDS } from '../../src';
 import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
 import { blockedWithin } from '../grid/view-lookup';

@@ -1,6 +1,6 @@
 import { LitElement, css, html } from 'lit';
 import { customElement, property, query, state } from 'lit/decorators.js';
-import type { JsonResult } from '../../src/report/json-result';
+import type { JsonResult } from '../../src';
 import { ChartController } from '../charts/chart-controller';
 import type { OutageBand } from '../charts/outage-bands';
 import { SHARE_QUANTITIES, shareDatasets } from '../charts/share-series';

@@ -1,6 +1,6 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property, query } from 'lit/decorators.js';
-import type { ViewResult } from '../../src/report/view-result';
+import type { ViewResult } from '../../src';
 import { ChartController } from '../charts/chart-controller';
 import { sigmaChartAxis, sigmaPlot, type SigmaChartKind, type SigmaPlot } from '../charts/sigma-series';
 import { num, seconds } from '../charts/findings-text';

@@ -1,12 +1,13 @@
 import { LitElement, css, html, nothing, type PropertyValues } from 'lit';
 import { customElement, property, state } from 'lit/decorators.js';
-import type { BudgetDocument, SensorEntry, SourceRow } from '../../src/document';
-import type { SourceKind } from '../../src/inputs/budget-input';
-import type { ViewResult } from '../../src/report/view-result';
-import { SENSOR_KINDS } from '../../src/sensors/registry';
-import { SOURCE_KINDS } from '../../src/sources/registry';
+import { ifDefined } from 'lit/directives/if-defined.js';
+import type { BudgetDocument, SensorEntry, SourceRow } from '../../src';
+import type { SourceKind } from '../../src';
+import type { ViewResult } from '../../src';
+import { SENSOR_KINDS } from '../../src';
+import { SOURCE_KINDS } from '../../src';
 import type { DocumentStore } from '../state/document-store';
-import { moveInGrid, type GridMove, type GridPosition } from '../grid/grid-navigation';
+import type { GridMove, GridPosition } from '../grid/grid-navigation';
 import { editorStyles } from '../grid/editor-styles';
 import { PASTE_COLUMNS } from '../grid/paste-rows';
 import { presentColumns, SOURCE_COLUMNS } from '../grid/source-columns';
@@ -18,6 +19,8 @@ import './sl-paste-report';
 const FIELD_LABEL: Record<string, string> = { value: 'Magnitude', correlationTime: 'Correlation time', rate: 'Rate override' };
 /** Columns on a row's first line; the rest (provenance, assumed) sit on its second. */
 const FIRST_LINE = SOURCE_COLUMNS.findIndex((c) => c.key === 'provenance');
+/** Header cells of the second line (visually hidden: the line's cells say what they hold), as [id, column, span]. */
+const SECOND_LINE_HEADERS: [string, number, number][] = [['head-provenance', FIRST_LINE, FIRST_LINE - 1], ['head-assumed', FIRST_LINE + 1, 1]];
 /** The unit an empty correlation time or rate override gets when typed into, shown beside it. */
 const UNIT_HINT: Record<string, string> = { tauUnit: 's', rateUnit: 'Hz' };
 const WIDTHS = ['8%', '18.5%', '16%', '13.5%', '8%', '7%', '7%', '7%', '15%'];
@@ -42,6 +45,8 @@ export class SlSourceGrid extends LitElement {
     tbody.row.active { background: var(--sl-accent-soft); }
     tbody.row.selected { background: #e9f3f5; }
     tr.second td { padding-bottom: 4px; }
+    tr.second-head th { padding: 0; border: 0; height: 0; }
+    .sr-only { position: absolute; width: 1px; height: 1px; overflow: hidden; clip: rect(0 0 0 0); white-space: nowrap; }
     td.na { background: repeating-linear-gradient(135deg, transparent 0 4px, var(--sl-paper) 4px 6px); }
     td.unit-hint { font: 12px var(--sl-mono); color: var(--sl-ink-soft); padding-top: 5px; }
     tr.messages td { padding: 2px 6px 5px; }
@@ -98,7 +103,8 @@ export class SlSourceGrid extends LitElement {
       <div class="hint" id="paste-hint">Paste rows from a spreadsheet (Ctrl+V on the grid), tab-separated in this order: ${PASTE_COLUMNS.join(' · ')}. Ctrl+C copies the active rows the same way.</div>
       <table role="grid" aria-label=${`Error sources of ${s.id}`} aria-describedby="paste-hint" @keydown=${this.grid.keydown} @focusin=${this.grid.focusin}>
         <colgroup>${WIDTHS.map((w) => html`<col style=${`width:${w}`} />`)}</colgroup>
-        <thead><tr>${SOURCE_COLUMNS.slice(0, FIRST_LINE).map((c) => html`<th scope="col" title=${c.title}>${c.label}</th>`)}</tr></thead>
+        <thead><tr>${SOURCE_COLUMNS.slice(0, FIRST_LINE).map((c) => html`<th scope="col" title=${c.title}>${c.label}</th>`)}</tr>
+          <tr class="second-head">${SECOND_LINE_HEADERS.map(([id, c, span]) => html`<th id=${id} scope="col" colspan=${span}><span class="sr-only">${SOURCE_COLUMNS[c].label}</span></th>`)}</tr></thead>
         ${s.sources.map((r, i) => this.renderRow(s, r, i))}
       </table>
       ${none ? html`<p class="empty">No rows yet: add one above, or paste rows copied from a spreadsheet here.</p>` : nothing}
@@ -111,13 +117,13 @@ export class SlSourceGrid extends LitElement {
     const present = presentColumns(s.kind, row);
     const ctx = this.grid.cellContext(s, this.sensorIndex, this.view);
     const hint = (c: number) => (present[c - 1] ? UNIT_HINT[SOURCE_COLUMNS[c].key] : undefined);
-    const td = (c: number, span = 1) => present[c]
-      ? html`<td data-row=${r} data-col=${c} colspan=${span}>${sourceCell(ctx, row, r, c)}</td>`
-      : html`<td class=${hint(c) ? 'unit-hint' : 'na'} colspan=${span}>${hint(c) ?? ''}</td>`;
+    const td = (c: number, span = 1, headers?: string) => present[c]
+      ? html`<td data-row=${r} data-col=${c} colspan=${span} headers=${ifDefined(headers)}>${sourceCell(ctx, row, r, c)}</td>`
+      : html`<td class=${hint(c) ? 'unit-hint' : 'na'} colspan=${span} headers=${ifDefined(headers)}>${hint(c) ?? ''}</td>`;
     const cls = `row${r === this.grid.active.row ? ' active' : ''}${this.grid.isSelected(r) ? ' selected' : ''}`;
     return html`<tbody class=${cls}>
       <tr aria-selected=${this.grid.isSelected(r) ? 'true' : 'false'}>${SOURCE_COLUMNS.slice(0, FIRST_LINE).map((_, c) => td(c))}</tr>
-      <tr class="second">${td(FIRST_LINE, FIRST_LINE - 1)}${td(FIRST_LINE + 1)}</tr>
+      <tr class="second">${SECOND_LINE_HEADERS.map(([id, c, span]) => td(c, span, id))}</tr>
       ${this.renderMessages(r)}
     </tbody>`;
   }

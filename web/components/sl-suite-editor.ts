@@ -1,7 +1,7 @@
 import { LitElement, css, html, nothing, type PropertyValues } from 'lit';
 import { customElement, property, state } from 'lit/decorators.js';
-import type { BudgetDocument } from '../../src/document';
-import type { ViewResult } from '../../src/report/view-result';
+import type { BudgetDocument } from '../../src';
+import type { ViewResult } from '../../src';
 import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
 import './sl-sensor-list';

@@ -1,7 +1,7 @@
 import { LitElement, css, html } from 'lit';
 import { customElement, property, query } from 'lit/decorators.js';
-import type { DimensionName } from '../../src/units';
-import { unitGroups } from '../../src/edits/unit-choices';
+import type { DimensionName } from '../../src';
+import { unitGroups } from '../../src';
 
 /** Detail of `sl-unit-change`. */
 export interface UnitChangeDetail {

@@ -1,6 +1,6 @@
 import { LitElement, css, html, nothing, svg } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
-import type { JsonResult } from '../../src/report/json-result';
+import type { JsonResult } from '../../src';
 import { levelText, num, outageSentence, quantityText, seconds } from '../charts/findings-text';
 import { requirementsOf, type RequirementEntry } from '../charts/result-shapes';
 

@@ -1,6 +1,6 @@
 import type { ReactiveController, ReactiveControllerHost } from 'lit';
-import type { BudgetDocument } from '../../src/document';
-import type { ViewResult } from '../../src/report/view-result';
+import type { BudgetDocument } from '../../src';
+import type { ViewResult } from '../../src';
 import type { ComputeRequest, ComputeResponse } from './protocol';
 
 /** Where the latest recompute stands. */

@@ -4,8 +4,8 @@
 // at once), then with every source's contribution. The controller keeps at
 // most one request in flight, so every request here is the newest it had.
 // One ViewSession keeps the document's workbook between edits.
-import { ViewSession } from '../../src/report/view-session';
-import type { ViewResult } from '../../src/report/view-result';
+import { ViewSession } from '../../src';
+import type { ViewResult } from '../../src';
 import type { ComputeRequest, ComputeResponse } from './protocol';
 
 const session = new ViewSession();

@@ -1,5 +1,5 @@
-import type { BudgetDocument } from '../../src/document';
-import type { ViewResult } from '../../src/report/view-result';
+import type { BudgetDocument } from '../../src';
+import type { ViewResult } from '../../src';
 
 /** Page -> worker: compute this document; `seq` orders requests. */
 export interface ComputeRequest {

@@ -4,9 +4,9 @@
  * reactive controller, so the grid component stays a view.
  */
 import type { LitElement, ReactiveController, ReactiveControllerHost } from 'lit';
-import type { SensorEntry } from '../../src/document';
-import type { SourceKind } from '../../src/inputs/budget-input';
-import type { ViewResult } from '../../src/report/view-result';
+import type { SensorEntry } from '../../src';
+import type { SourceKind } from '../../src';
+import type { ViewResult } from '../../src';
 import type { DocumentStore } from '../state/document-store';
 import type { CellCommitDetail, CellMove } from '../components/sl-cell';
 import { openControl, undoKeys } from './grid-keys';

@@ -4,15 +4,15 @@
  * correlation time, correlation time unit, provenance. Every line is either
  * used or reported with its text and the reason, so nothing is lost.
  */
-import type { SensorEntry, SourceRow } from '../../src/document';
-import type { SensorKind, SourceKind } from '../../src/inputs/budget-input';
-import { SENSOR_KINDS } from '../../src/sensors/registry';
-import { SOURCE_KINDS } from '../../src/sources/registry';
-import { DIMENSIONS, unitDimension } from '../../src/units';
-import { cellText, readCellText } from '../../src/edits/cell-text';
-import { idProblem, isTaken, uniqueId } from '../../src/edits/ids';
+import type { SensorEntry, SourceRow } from '../../src';
+import type { SensorKind, SourceKind } from '../../src';
+import { SENSOR_KINDS } from '../../src';
+import { SOURCE_KINDS } from '../../src';
+import { DIMENSIONS, unitDimension } from '../../src';
+import { cellText, readCellText } from '../../src';
+import { idProblem, isTaken, uniqueId } from '../../src';
 import { changeRowKind, fillRequired, newRow } from './row-edits';
-import { rowDimensions } from '../../src/edits/unit-choices';
+import { rowDimensions } from '../../src';
 
 /** The pasted columns, in order, as the hint in the grid names them. */
 export const PASTE_COLUMNS = ['id', 'kind', 'value', 'unit', 'correlation time', 'correlation time unit', 'provenance'] as const;

@@ -4,14 +4,14 @@
  * component (sl-source-grid) owns the state and the handlers.
  */
 import { html, nothing, type TemplateResult } from 'lit';
-import type { SensorEntry, SourceRow } from '../../src/document';
-import type { ViewResult } from '../../src/report/view-result';
-import { SENSOR_KINDS } from '../../src/sensors/registry';
-import { SOURCE_KINDS } from '../../src/sources/registry';
+import type { SensorEntry, SourceRow } from '../../src';
+import type { ViewResult } from '../../src';
+import { SENSOR_KINDS } from '../../src';
+import { SOURCE_KINDS } from '../../src';
 import type { CellCommitDetail } from '../components/sl-cell';
 import type { UnitChangeDetail } from '../components/sl-unit-picker';
 import { rowOption, SOURCE_COLUMNS, type SourceColumn } from './source-columns';
-import { rowDimensions } from '../../src/edits/unit-choices';
+import { rowDimensions } from '../../src';
 import { cellErrorAt, cellValueAt } from './view-lookup';
 
 /** A row's field that has a unit picker. */

@@ -3,12 +3,12 @@
  * store. Functions take the store and the sensor's index and return what the
  * grid should say or select next.
  */
-import type { Cell, SourceRow } from '../../src/document';
-import type { SourceKind } from '../../src/inputs/budget-input';
-import { unitDimension } from '../../src/units';
+import type { Cell, SourceRow } from '../../src';
+import type { SourceKind } from '../../src';
+import { unitDimension } from '../../src';
 import type { DocumentStore } from '../state/document-store';
-import { changeUnit } from '../../src/edits/change-unit';
-import { idProblem } from '../../src/edits/ids';
+import { changeUnit } from '../../src';
+import { idProblem } from '../../src';
 import { applyPastedRows, parsePastedRows, type PasteProblem } from './paste-rows';
 import { changeRowKind, moveItem, newRow, renameRow } from './row-edits';
 import { rowOption } from './source-columns';

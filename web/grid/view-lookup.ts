@@ -3,8 +3,8 @@
  * error or evaluated number, a problem that blocked the analysis, items
  * left out. Paths are document paths (`sensors[0].sources[1].value`).
  */
-import type { CellError } from '../../src/sheet/cell-error';
-import type { ViewResult } from '../../src/report/view-result';
+import type { CellError } from '../../src';
+import type { ViewResult } from '../../src';
 
 /** The error of the cell at `path` (a value cell path), if the view has one. Throws nothing. */
 export function cellErrorAt(view: ViewResult | undefined, path: string): CellError | undefined {

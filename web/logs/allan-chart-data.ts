@@ -5,9 +5,9 @@
  * logarithmic axes. Colours from the colour-blind-safe palette; no animation.
  */
 import type { ChartOptions, TooltipItem } from 'chart.js';
-import { termDeviation } from '../../src/allan/noise-terms';
-import { SENSOR_TERM_UNITS } from '../../src/allan/sensor-term-units';
-import { formatSignificant, unitFor } from '../../src/units';
+import { termDeviation } from '../../src';
+import { SENSOR_TERM_UNITS } from '../../src';
+import { formatSignificant, unitFor } from '../../src';
 import type { LineChartData, LineDataset } from '../charts/chart-controller';
 import { seriesColour, TOTAL_COLOUR } from '../styles/palette';
 import type { AllanOutcome } from './log-protocol';

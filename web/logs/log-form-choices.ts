@@ -3,8 +3,8 @@
  * and per-sample increments, from the src/units pickers), a first guess of
  * the time column, and the calibration units.
  */
-import { ALLAN_SENSOR_KINDS, SENSOR_TERM_UNITS, type AllanSensorKind } from '../../src/allan/sensor-term-units';
-import { DIMENSIONS, type DimensionName } from '../../src/units';
+import { ALLAN_SENSOR_KINDS, SENSOR_TERM_UNITS, type AllanSensorKind } from '../../src';
+import { DIMENSIONS, type DimensionName } from '../../src';
 
 /** A labelled group of units for a select. */
 export interface UnitChoiceGroup {
@@ -56,7 +56,7 @@ export function usableColumns(columns: readonly string[]): string[] {
 
 /** The time unit a column name suggests ("time_ms" -> ms), else s. Throws nothing. */
 export function guessTimeUnit(column: string | undefined): string {
-  if (column && /(^|[_\s(\[])ms[)\]]?$/i.test(column.trim())) return 'ms';
-  if (column && /(^|[_\s(\[])min[)\]]?$/i.test(column.trim())) return 'min';
+  if (column && /(^|[_\s([])ms[)\]]?$/i.test(column.trim())) return 'ms';
+  if (column && /(^|[_\s([])min[)\]]?$/i.test(column.trim())) return 'min';
   return 's';
 }

@@ -4,9 +4,9 @@
  * starting with '#' come first, then one line naming the columns. The page
  * shows these names so the user picks columns that exist.
  */
-import { InputError } from '../../src/errors';
-import { MAX_LINE_CHARS } from '../../src/allan/parse-log';
-import { detectDelimiter, readHeader } from '../../src/allan/log-header';
+import { InputError } from '../../src';
+import { MAX_LINE_CHARS } from '../../src';
+import { detectDelimiter, readHeader } from '../../src';
 import type { LogHeader } from './log-protocol';
 import { readBlobStart } from './read-log-blob';
 

@@ -3,14 +3,14 @@
  * file only routes messages): stream a log into the parser, then compute its
  * Allan deviation or its calibration, timing the two stages apart.
  */
-import { InputError } from '../../src/errors';
-import { analyseLogColumn, resolveLogKind } from '../../src/allan/log-allan';
-import { SensorLogReader } from '../../src/allan/parse-log';
-import type { LogParseOptions, SensorLogTable } from '../../src/allan/log-table';
-import { fitOffsetAndScaleFactor } from '../../src/calibration/linear-calibration';
-import { checkResidualWhiteness } from '../../src/calibration/residual-whiteness';
-import { calibrationReport, checkCalibrationUnit } from '../../src/calibration/calibration-report';
-import { unitFor } from '../../src/units';
+import { InputError } from '../../src';
+import { analyseLogColumn, resolveLogKind } from '../../src';
+import { SensorLogReader } from '../../src';
+import type { LogParseOptions, SensorLogTable } from '../../src';
+import { fitOffsetAndScaleFactor } from '../../src';
+import { checkResidualWhiteness } from '../../src';
+import { calibrationReport, checkCalibrationUnit } from '../../src';
+import { unitFor } from '../../src';
 import type { AllanJobOptions, AllanOutcome, CalibrationJobOptions, CalibrationOutcome, LogProgress } from './log-protocol';
 import { readBlobInSlices } from './read-log-blob';
 

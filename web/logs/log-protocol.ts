@@ -4,9 +4,9 @@
  * compute its Allan deviation or its calibration. The page never parses a
  * log itself, so a 10-million-row file cannot freeze it.
  */
-import type { LogAllanResult } from '../../src/allan/log-allan';
-import type { AllanSensorKind } from '../../src/allan/sensor-term-units';
-import type { CalibrationReport } from '../../src/calibration/calibration-report';
+import type { LogAllanResult } from '../../src';
+import type { AllanSensorKind } from '../../src';
+import type { CalibrationReport } from '../../src';
 
 /** What the Allan job reads and how (column names as the header spells them). */
 export interface AllanJobOptions {

@@ -2,7 +2,7 @@
 // the file in slices, posting progress at most every PROGRESS_MS, and answers
 // with one result or one error message. The page cancels a job by
 // terminating the worker, so nothing here needs to watch for cancellation.
-import { SigmaLedgerError } from '../../src/errors';
+import { SigmaLedgerError } from '../../src';
 import { peekLogHeader } from './log-header-peek';
 import { runAllanJob, runCalibrationJob } from './log-jobs';
 import type { LogJob, LogJobMessage, LogProgress } from './log-protocol';

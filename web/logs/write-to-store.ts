@@ -3,7 +3,7 @@
  * sensor as a single `store.edit`, so one undo reverts the whole write.
  */
 import type { DocumentStore } from '../state/document-store';
-import { writeRows, type RowPlan, type WrittenRow } from '../../src/edits/row-writer';
+import { writeRows, type RowPlan, type WrittenRow } from '../../src';
 
 /** What a write did, and a one-line note for the workbench's status line. */
 export interface WriteResult {

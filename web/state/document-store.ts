@@ -1,5 +1,5 @@
-import type { BudgetDocument, Cell } from '../../src/document';
-import { setAtPath } from '../../src/document/document-path';
+import type { BudgetDocument, Cell } from '../../src';
+import { setAtPath } from '../../src';
 
 /** Most edits kept for undo. */
 const UNDO_LIMIT = 500;

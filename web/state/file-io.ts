@@ -1,4 +1,4 @@
-import { parseBudgetDocument, serializeBudgetDocument, type BudgetDocument } from '../../src/document';
+import { parseBudgetDocument, serializeBudgetDocument, type BudgetDocument } from '../../src';
 
 /**
  * Reads a budget file the user picked or dropped.
