@@ -7,12 +7,13 @@ import { buildNominalTrajectory, type NominalTrajectory } from './mission/nomina
 import { buildErrorModel } from './sensors/build-error-model';
 import type { ErrorModel } from './covariance/error-model';
 import { runCovariance, type CovarianceHistory } from './covariance/run-covariance';
+import { estimateWork, refuseExcessiveWork, WORK_LIMITS } from './covariance/work-estimate';
 import { buildBudgetSeries, type BudgetSeries } from './budget/budget-series';
 import { evaluateRequirement, resolveRequirements, type RequirementResult } from './budget/requirements';
 import { checkpointBudgets, type CheckpointBudget } from './budget/checkpoints';
 
 /** Most steps one analysis may take (a 2-hour mission at 0.01 s); keeps a typo in the step from hanging the page. */
-export const MAX_STEPS = 720_000;
+export const MAX_STEPS = WORK_LIMITS.steps;
 
 /** Everything one analysis produces. */
 export interface BudgetResult {
@@ -39,6 +40,7 @@ export function computeBudget(input: BudgetInput, options: { contributions?: boo
   const mission = resolveMission(input.mission);
   const stepS = resolveStep(input, mission.durationS);
   const model = buildErrorModel(input.sensors, mission, input.mission.initialSigmaNotes);
+  refuseExcessiveWork(estimateWork(model, input.sensors, mission.durationS, stepS, options), model, input.sensors);
   const requirementSpecs = resolveRequirements(input.requirements, mission.durationS);
   const trajectory = buildNominalTrajectory(mission, stepS);
   const history = runCovariance(model, trajectory, { contributions: options.contributions });

@@ -8,10 +8,11 @@ import { InputError, SigmaLedgerError } from '../errors';
 import { formatSummary } from '../report/text-summary';
 import { buildJsonResult } from '../report/json-result';
 import { formatSignificant } from '../units';
+import { EXIT } from './exit-codes';
+import { escapeTerminalText } from './terminal-text';
 import { loadBudget, sheetProblems, withDocumentPaths, type LoadedBudget } from './load-budget';
 
-/** Exit codes: every requirement holds, some requirement fails, bad input. */
-export const EXIT = { pass: 0, fail: 1, badInput: 2 } as const;
+export { EXIT } from './exit-codes';
 
 /**
  * Runs a command body, turning a {@link SigmaLedgerError} into one line on
@@ -99,7 +100,7 @@ export function checkCommand(file: string, io: Io): number {
 
 function writeOutput(path: string, text: string): void {
   try {
-    writeFileSync(path, text);
+    writeFileSync(path, escapeTerminalText(text));
   } catch (e) {
     throw new InputError('--output', `cannot write ${path} (${(e as NodeJS.ErrnoException).code ?? 'error'}): check that its folder exists and is writable`);
   }

@@ -2,6 +2,8 @@ import { parseArgs } from 'node:util';
 import { SigmaLedgerError } from '../errors';
 import { CAUTION } from '../report/caution';
 import { checkCommand, EXIT, runCommand, sizeCommand, type Io } from './commands';
+import { reportInternalError, wantsDebug } from './internal-error';
+import { escapeTerminalText } from './terminal-text';
 import { ALLAN_CLI_OPTIONS, allanCommand, allanOptionsFromArgs } from './allan-command';
 import { CALIBRATE_CLI_OPTIONS, calibrateCommand, calibrateOptionsFromArgs } from './calibrate-command';
 import { INTO_CLI_OPTIONS } from './write-into-budget';
@@ -28,7 +30,8 @@ usage:
       with --into BUDGET --sensor ID their uncertainties go into the sensor's
       turn-on-bias and scale-factor rows
 
-exit codes: 0 every requirement holds, 1 some requirement fails, 2 bad input
+exit codes: 0 every requirement holds, 1 some requirement fails, 2 bad input,
+  3 internal error (a fault of sigma-ledger; add --debug for the stack trace)
 
 ${CAUTION}
 `;
@@ -41,13 +44,20 @@ const OPTIONS = {
   vary: { type: 'string' },
   tolerance: { type: 'string' },
   help: { type: 'boolean', default: false },
+  debug: { type: 'boolean', default: false },
   ...ALLAN_CLI_OPTIONS,
   ...CALIBRATE_CLI_OPTIONS,
   ...INTO_CLI_OPTIONS,
 } as const;
 
-/** Runs the command line; returns the exit code. Messages for bad input go to `io.err`, never as a stack trace. */
-export async function main(argv: string[], io: Io = processIo()): Promise<number> {
+/**
+ * Runs the command line; returns the exit code ({@link EXIT}). Messages for
+ * bad input go to `io.err`, never as a stack trace; an internal error exits
+ * 3 with a stack trace only under `--debug`. Every text printed is
+ * escaped for the terminal (see terminal-text.ts).
+ */
+export async function main(argv: string[], rawIo: Io = processIo()): Promise<number> {
+  const io: Io = { out: (t) => rawIo.out(escapeTerminalText(t)), err: (t) => rawIo.err(escapeTerminalText(t)) };
   try {
     const { values, positionals } = parseArgs({ args: argv, options: OPTIONS, allowPositionals: true });
     const [command, file, ...extra] = positionals;
@@ -82,7 +92,7 @@ export async function main(argv: string[], io: Io = processIo()): Promise<number
       return EXIT.badInput;
     }
     if (e instanceof TypeError && 'code' in e && String(e.code).startsWith('ERR_PARSE_ARGS')) return usageError(io, e.message);
-    throw e;
+    return reportInternalError(e, wantsDebug(argv), io.err);
   }
 }
 
