@@ -1,3 +1,4 @@
+import { estimateWork, refuseExcessiveWork } from '../covariance/work-estimate';
 import { InputError } from '../errors';
 import type { BudgetInput, SourceInput } from '../inputs/budget-input';
 import { resolveMission } from '../mission/resolve-mission';
@@ -103,6 +104,7 @@ function evaluateWith(input: BudgetInput, sourceId: string, value: number, requi
   const mission = resolveMission(copy.mission);
   const stepS = positiveToSI(copy.step, 'time', 'step');
   const model = buildErrorModel(copy.sensors, mission, copy.mission.initialSigmaNotes);
+  refuseExcessiveWork(estimateWork(model, copy.sensors, mission.durationS, stepS, { contributions: false }), model, copy.sensors);
   const req = resolveRequirements(copy.requirements, mission.durationS).find((r) => r.id === requirementId);
   if (!req) throw new InputError('requirement', `no requirement "${requirementId}"`);
   const traj = buildNominalTrajectory(mission, stepS);

@@ -39,7 +39,7 @@ function manyLandmarks(count: number, rateHz: number): any {
 const CASES: { name: string; doc: () => any; field: string; detail: RegExp }[] = [
   { name: 'gnss-10khz.json', doc: () => hourLong({ 'sensors[2].rate.value': 10_000 }), field: 'sensors[2].rate', detail: /10000 Hz gives 7\.3e7 scalar measurements over the mission.*the limit is 5e6/ },
   { name: 'gnss-20khz.json', doc: () => hourLong({ 'sensors[2].rate.value': 20_000 }), field: 'sensors[2].rate', detail: /20000 Hz gives 1\.5e8 scalar measurements/ },
-  { name: 'gnss-1e9hz.json', doc: () => patched({ 'sensors[2].rate.value': 1e9 }), field: 'sensors[2].rate', detail: /Hz/ },
+  { name: 'gnss-1e9hz.json', doc: () => patched({ 'sensors[2].rate.value': 1e9 }), field: 'sensors[2].rate.value', detail: /1000000000 Hz is more than 100000 Hz/ },
   { name: 'landmarks-500-at-100hz.json', doc: () => manyLandmarks(500, 100), field: 'sensors[3].rate', detail: /100 Hz with 1000 scalar measurements per update/ },
   { name: 'gnss-29x64-multipath.json', doc: () => manyReceivers(29, 63), field: 'sensors[2].sources', detail: /3660 states .* would need .* GB of memory; the limit is 2 GB/ },
   { name: 'step-too-fine.json', doc: () => hourLong({ 'settings.step.value': 0.001 }), field: 'settings.step.value', detail: /3660000 steps is more than 720000/ },
@@ -52,7 +52,7 @@ describe('the work-limit corpus', () => {
     expectViewRefusal(doc(), field);
     // Refused from the estimate, not after running: well under the seconds the run would take.
     expect(Date.now() - started).toBeLessThan(20_000);
-  });
+  }, 60_000);
 
   it('lets ordinary rates through: two landmarks at 1, 10 and 100 Hz compute', () => {
     for (const rate of [1, 10, 100]) {
