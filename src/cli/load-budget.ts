@@ -1,5 +1,7 @@
-import { readFileSync, statSync } from 'node:fs';
-import { parseBudgetDocument, MAX_TEXT_CHARS, type BudgetDocument } from '../document';
+import { parseBudgetDocument, type BudgetDocument } from '../document';
+import { readBudgetText } from './read-budget-text';
+import { dropRefusedItems } from '../sheet/drop-refused-items';
+import { prepareBudget } from '../pipeline';
 import { evaluateBudgetDocument, documentPathOf, type SheetEvaluation } from '../sheet';
 import { InputError, SigmaLedgerError } from '../errors';
 import type { BudgetInput } from '../inputs/budget-input';
@@ -17,20 +19,10 @@ export interface LoadedBudget {
  * @throws InputError naming the file for an unreadable, oversize or malformed file.
  */
 export function loadBudget(fileName: string): LoadedBudget {
-  let size: number;
-  try {
-    const stat = statSync(fileName);
-    if (!stat.isFile()) throw new InputError(fileName, 'is not a file (a folder?); give the path of a budget .json file');
-    size = stat.size;
-  } catch (e) {
-    if (e instanceof InputError) throw e;
-    throw new InputError(fileName, `cannot be read (${(e as NodeJS.ErrnoException).code ?? 'error'}): check the path`);
-  }
-  // Bytes >= characters for UTF-8, so this refuses before reading anything huge.
-  if (size > 4 * MAX_TEXT_CHARS) throw new InputError(fileName, `is ${size} bytes; a budget file may have at most ${MAX_TEXT_CHARS} characters`);
-  const text = readFileSync(fileName, 'utf8');
+  const text = readBudgetText(fileName);
   const { document, notes } = parseBudgetDocument(text, fileName);
-  return { fileName, document, notes, sheet: evaluateBudgetDocument(document) };
+  // Items the engine refuses (a unit of the wrong kind for the row) are left out in place, like cell errors.
+  return { fileName, document, notes, sheet: dropRefusedItems(document, evaluateBudgetDocument(document), (input) => prepareBudget(input)) };
 }
 
 /** Lines describing every cell error and omitted item, each with its location. */

@@ -74,7 +74,7 @@ export interface JsonResult {
   requirements: RequirementEntry[];
   checkpoints: CheckpointEntry[];
   noise: NoiseTrace;
-  status: { healthy: boolean; issues: BudgetResult['history']['issues'] };
+  status: { healthy: boolean; issues: BudgetResult['history']['issues']; warnings: BudgetResult['warnings'] };
 }
 
 /**
@@ -128,7 +128,7 @@ export function buildJsonResult(result: BudgetResult, title: string, every = 1):
       }),
     })),
     noise: traceNoise(result.model),
-    status: { healthy: result.history.issues.length === 0, issues: result.history.issues },
+    status: { healthy: result.history.issues.length === 0, issues: result.history.issues, warnings: result.warnings },
   };
 }
 

@@ -3,7 +3,8 @@ import { evaluateBudgetDocument, documentPathOf } from '../sheet';
 import type { CellError } from '../sheet/cell-error';
 import type { OmittedItem } from '../sheet/cell-reader';
 import type { SheetEvaluation } from '../sheet/sheet-evaluation';
-import { computeBudget } from '../pipeline';
+import { computeBudget, prepareBudget } from '../pipeline';
+import { dropRefusedItems } from '../sheet/drop-refused-items';
 import { SigmaLedgerError } from '../errors';
 import { levelSeries, limitDimension } from '../budget/levels';
 import { fromSI, toSI } from '../units';
@@ -62,7 +63,9 @@ export function computeView(doc: BudgetDocument, options: { contributions?: bool
 }
 
 /** The view of a document whose cells are already evaluated (see view-session.ts, which keeps the sheet between edits). */
-export function viewFromSheet(doc: BudgetDocument, sheet: SheetEvaluation, options: { contributions?: boolean } = {}): ViewResult {
+export function viewFromSheet(doc: BudgetDocument, evaluated: SheetEvaluation, options: { contributions?: boolean } = {}): ViewResult {
+  // Items the engine refuses (a unit of the wrong kind for the row) are left out and shown in place, like cell errors.
+  const sheet = dropRefusedItems(doc, evaluated, (input) => prepareBudget(input, options));
   const base: ViewResult = {
     title: doc.title, caution: CAUTION, cellErrors: sheet.cellErrors, omitted: sheet.omitted,
     cellValues: Object.fromEntries(sheet.cellValues), curves: [],

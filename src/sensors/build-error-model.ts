@@ -5,6 +5,7 @@ import { emptySource, ModelBuilder } from '../covariance/model-builder';
 import type { ErrorModel } from '../covariance/error-model';
 import type { ResolvedMission } from '../mission/resolve-mission';
 import { SENSOR_KIND_NAMES, SENSOR_KINDS } from './registry';
+import { refuseUnreadFields } from './field-applicability';
 
 /** Ids of the two sources the mission owns (ENGINE.md §7). */
 export const INITIAL_POSITION_ID = 'mission.initialPosition';
@@ -30,6 +31,7 @@ export function buildErrorModel(sensors: SensorInput[], mission: ResolvedMission
   head.initialVariance.push({ state: b.core.heading, varianceSI: mission.initialHeadingSigmaRad ** 2 });
   b.sources.push(pos, head);
   list.forEach((sensor, i) => {
+    refuseUnreadFields(sensor, `sensors[${i}]`);
     SENSOR_KINDS[sensor.kind].place(b, sensor, { path: `sensors[${i}]`, missionDurationS: mission.durationS });
   });
   return b.build();
