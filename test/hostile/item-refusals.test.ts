@@ -10,7 +10,7 @@ import { baseDocument, patched, writeCase } from './hostile-documents';
 
 const view = (doc: object) => computeView(parseBudgetDocument(JSON.stringify(doc), 'case.json').document);
 
-describe('an item the engine refuses', () => {
+describe('an item the engine refuses', { timeout: 60_000 }, () => {
   const wrongUnit = () => patched({ 'sensors[0].sources[0].unit': 'm' });
 
   it('is left out with its error in place, and the rest computes, marked partial (page)', () => {
@@ -47,7 +47,7 @@ describe('an item the engine refuses', () => {
   });
 });
 
-describe('a quantisation LSB coarser than the motion', () => {
+describe('a quantisation LSB coarser than the motion', { timeout: 60_000 }, () => {
   function withLsb(value: number): any {
     const doc = baseDocument();
     doc.sensors[0].sources.push({ id: 'lsb', kind: 'quantisation', value, unit: 'deg/s', provenance: 'hostile case', assumed: true });

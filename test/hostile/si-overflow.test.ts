@@ -28,7 +28,7 @@ const CASES: { name: string; doc: () => any; field: string; detail: RegExp }[] =
   { name: 'limit-beyond-earth.json', doc: () => patched({ 'requirements[0].limit.value': 1e9 }), field: 'requirements[0].limit.value', detail: /circumference/ },
 ];
 
-describe('the SI-overflow corpus', () => {
+describe('the SI-overflow corpus', { timeout: 60_000 }, () => {
   it.each(CASES)('refuses $name at $field', async ({ name, doc, field, detail }) => {
     await expectCliRefusal(name, doc(), field, detail);
     expectViewRefusal(doc(), field);

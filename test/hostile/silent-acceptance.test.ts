@@ -42,7 +42,7 @@ const CASES: { name: string; doc: () => any; field: string; detail: RegExp }[] =
   },
 ];
 
-describe('the silent-acceptance corpus', () => {
+describe('the silent-acceptance corpus', { timeout: 60_000 }, () => {
   it.each(CASES)('refuses $name at $field', async ({ name, doc, field, detail }) => {
     await expectCliRefusal(name, doc(), field, detail);
     expectViewRefusal(doc(), field);

@@ -45,7 +45,7 @@ const CASES: { name: string; doc: () => any; field: string; detail: RegExp }[] =
   { name: 'step-too-fine.json', doc: () => hourLong({ 'settings.step.value': 0.001 }), field: 'settings.step.value', detail: /3660000 steps is more than 720000/ },
 ];
 
-describe('the work-limit corpus', () => {
+describe('the work-limit corpus', { timeout: 60_000 }, () => {
   it.each(CASES)('refuses $name at $field before running', async ({ name, doc, field, detail }) => {
     const started = Date.now();
     await expectCliRefusal(name, doc(), field, detail);
