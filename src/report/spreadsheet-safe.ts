@@ -22,7 +22,7 @@ export function restoreCell(text: string): string {
   return text.startsWith("'") && FORMULA_START.test(text.slice(1)) && !PLAIN_NUMBER.test(text.slice(1)) ? text.slice(1) : text;
 }
 
-/** `text` for Markdown: on one line, with \ ` | < > [ ] ! escaped so it renders as the same text. Throws nothing. */
+/** `text` for Markdown: on one line, with \ ` | < [ ] ! escaped so it renders as the same text. Throws nothing. */
 export function markdownText(text: string): string {
-  return text.replace(/\s*[\r\n]+\s*/g, ' ').replace(/[\\`|<>[\]!]/g, (c) => `\\${c}`);
+  return text.replace(/\s*[\r\n]+\s*/g, ' ').replace(/[\\`|<[\]!]/g, (c) => `\\${c}`);
 }

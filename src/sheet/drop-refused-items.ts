@@ -37,10 +37,11 @@ function locationOf(doc: BudgetDocument, docPath: string): CellLocation {
 /** The item in words, as the sheet's omissions say it: `row gyro.arw`, `requirement position`. */
 function describeItem(doc: BudgetDocument, itemPath: string): string {
   const loc = locationOf(doc, itemPath);
-  const list = /\.(sources|outages|landmarks)\[/.exec(itemPath)?.[1];
+  const [, list, index] = /(?:\.(sources|outages|landmarks))?\[(\d+)\]$/.exec(itemPath) ?? [];
+  const name = loc.itemId ?? Number(index) + 1;
   if (list === 'sources') return `row ${loc.sensorId}.${loc.rowId}`;
-  if (list) return `${list === 'outages' ? 'outage' : 'landmark'} ${loc.itemId} of ${loc.sensorId}`;
-  return `${itemPath.startsWith('requirements') ? 'requirement' : 'checkpoint'} ${loc.itemId}`;
+  if (list) return `${list === 'outages' ? 'outage' : 'landmark'} ${name} of ${loc.sensorId}`;
+  return `${itemPath.startsWith('requirements') ? 'requirement' : 'checkpoint'} ${name}`;
 }
 
 /** Removes input item `index` of a list, and its entry in the index map. */
