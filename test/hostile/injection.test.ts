@@ -62,7 +62,7 @@ describe('spreadsheet formula injection', { timeout: 60_000 }, () => {
   it('neutralises ledger cells and escapes the ledger heading', () => {
     const noise = { r: [{ name: 'gnss.north', unitSI: 'm²', totalSI: 1, pieces: [{ sourceId: 'gnss.white', valueSI: 1, derivation: '+cmd|calc', conversions: ['@x'] }] }], q: [], p0: [] };
     const md = noiseLedgerMarkdown(noise as never, '<img src=x onerror=alert(1)> [click](javascript:alert(1)) | x', 'caution');
-    expect(md.split('\n')[0]).toBe('## R, Q and P0 used: \\<img src=x onerror=alert(1)\\> \\[click\\](javascript:alert(1)) \\| x');
+    expect(md.split('\n')[0]).toBe('## R, Q and P0 used: \\<img src=x onerror=alert(1)> \\[click\\](javascript:alert(1)) \\| x');
     expect(md).toContain("| '+cmd\\|calc | '@x |");
     expect(markdownText('a\nb')).toBe('a b');
   });
