@@ -7,23 +7,10 @@
 import { readFileSync, statSync } from 'node:fs';
 import { MAX_TEXT_CHARS } from '../document';
 import { InputError } from '../errors';
+import { firstInvalidUtf8Byte, invalidUtf8Message } from '../document/invalid-utf8';
 
 /** Largest file read, in bytes: UTF-8 takes at most 4 bytes per character, so no file within the character limit is refused here. */
 export const MAX_FILE_BYTES = 4 * MAX_TEXT_CHARS;
-
-/**
- * Offset of the first byte that is not part of valid UTF-8, or -1. Node's
- * lenient decoder replaces each bad sequence by U+FFFD; the first U+FFFD
- * that the bytes do not spell (EF BF BD) marks it. Throws nothing.
- */
-export function firstInvalidUtf8Byte(bytes: Buffer, text: string): number {
-  let offset = 0;
-  for (const ch of text) {
-    if (ch === '\uFFFD' && !(bytes[offset] === 0xef && bytes[offset + 1] === 0xbf && bytes[offset + 2] === 0xbd)) return offset;
-    offset += Buffer.byteLength(ch, 'utf8');
-  }
-  return -1;
-}
 
 /**
  * Reads `fileName` as UTF-8 text.
@@ -44,9 +31,7 @@ export function readBudgetText(fileName: string): string {
   }
   const bytes = readFileSync(fileName);
   const text = bytes.toString('utf8');
-  const bad = text.includes('\uFFFD') ? firstInvalidUtf8Byte(bytes, text) : -1;
-  if (bad >= 0) {
-    throw new InputError(fileName, `is not valid UTF-8 text: byte offset ${bad} (0x${bytes[bad].toString(16).padStart(2, '0')}) starts no character; save the file as UTF-8`);
-  }
+  const bad = firstInvalidUtf8Byte(bytes, text);
+  if (bad >= 0) throw new InputError(fileName, invalidUtf8Message(bytes, bad));
   return text;
 }
