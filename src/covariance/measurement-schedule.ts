@@ -15,7 +15,7 @@ export interface ScheduledMeasurement {
   rTotal: number;
 }
 
-/** Whether a measurement at tS falls in a half-open outage [start, end) (ENGINE.md §5, 1e-9 s slack). */
+/** Whether a measurement at tS falls in a half-open outage [start, end) (docs/planar-model.md §5, 1e-9 s slack). */
 export function inOutage(outages: { startS: number; endS: number }[], tS: number): boolean {
   return outages.some((o) => tS >= o.startS - TIME_SLACK_S && tS < o.endS - TIME_SLACK_S);
 }
@@ -23,7 +23,7 @@ export function inOutage(outages: { startS: number; endS: number }[], tS: number
 /**
  * Every scalar measurement of the mission, grouped by the step boundary it is
  * processed at: a sensor at rate f measures at t = j/f and is processed at
- * the first boundary at or after t, in sensor order (ENGINE.md §5).
+ * the first boundary at or after t, in sensor order (docs/planar-model.md §5).
  * Built before propagation so that geometry errors (a landmark on the path)
  * are reported as input errors, not from inside the loop.
  */

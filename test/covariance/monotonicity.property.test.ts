@@ -6,7 +6,7 @@ import type { BudgetInput, SensorInput, SourceInput } from '../../src/inputs/bud
 // Sub-normal magnitudes (5e-324 m) are refused as implausible inputs (src/inputs/plausible-range.ts): read them as zero.
 const double = (c: { min: number; max: number; noNaN: boolean }) => fc.double(c).map((v) => (Math.abs(v) < 1e-100 ? 0 : v));
 
-// ENGINE.md §9: for an optimal filter the covariance never decreases when a noise magnitude grows
+// docs/planar-model.md §9: for an optimal filter the covariance never decreases when a noise magnitude grows
 // (the Riccati map is monotone in P0, Q and R; Anderson & Moore, Optimal Filtering, 1979, from memory),
 // to round-off: 1e-12 relative is allowed there.
 const q = (value: number, unit: string) => ({ value, unit });
