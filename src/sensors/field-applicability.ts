@@ -3,33 +3,34 @@
  * kinds read. Written where nothing reads them they would be silently
  * ignored (`landmarks` on a GNSS receiver, `quantum: "angle"` on a wheel
  * speed's LSB), so the user would believe in a model that is not run.
+ * Which kind reads what comes from the registries: a sensor kind's
+ * `settings`, and a row's option from the sensor's `rowOptions` or the
+ * source kind's own `option`.
  */
 import { InputError } from '../errors';
-import type { SensorInput, SensorKind, SourceInput, SourceKind } from '../inputs/budget-input';
+import type { SensorInput, SourceInput } from '../inputs/budget-input';
+import { SOURCE_KINDS } from '../sources/registry';
+import type { OptionField } from '../sources/source-kind';
 import { unitDimension } from '../units';
+import { SENSOR_KINDS } from './registry';
 
-/** Sensor fields read by some kinds only. */
-const SENSOR_FIELDS: Record<string, SensorKind[]> = {
-  landmarks: ['range-bearing'], maxRange: ['range-bearing'], fieldOfView: ['range-bearing'], observables: ['range-bearing'],
-};
+/** Sensor fields some kinds read besides id, kind, rate, sources and outages. */
+const SENSOR_SETTING_FIELDS = ['landmarks', 'maxRange', 'fieldOfView', 'observables'] as const;
+const OPTION_FIELDS: readonly OptionField[] = ['biasForm', 'densitySides', 'multipathModel', 'component', 'quantum'];
 
-/** Row options read by some source kinds (and sensor kinds) only. */
-const ROW_OPTIONS: Record<string, { sources?: SourceKind[]; sensors?: SensorKind[] }> = {
-  quantum: { sources: ['quantisation'], sensors: ['yaw-gyro'] },
-  biasForm: { sources: ['bias-instability'] },
-  multipathModel: { sources: ['multipath'] },
-  component: { sensors: ['range-bearing'] },
-};
+/** The option a row of this sensor reads, if any. */
+function rowOption(sensor: SensorInput, row: SourceInput) {
+  return SENSOR_KINDS[sensor.kind]?.rowOptions?.[row.kind] ?? SOURCE_KINDS[row.kind]?.option;
+}
 
-const list = (xs: readonly string[]) => xs.map((x) => `"${x}"`).join(', ');
-
-/** A quantisation row's `quantum` must agree with its unit: an angle LSB is "angle", a rate LSB "rate". */
-function checkQuantum(row: SourceInput, path: string): void {
-  if (row.quantum === undefined) return;
+/** A row's option must agree with its unit where the option says it applies to some dimensions only. */
+function checkAgainstUnit(sensor: SensorInput, row: SourceInput, field: OptionField, path: string): void {
+  const spec = rowOption(sensor, row);
   const dim = unitDimension(row.value?.unit);
-  const implied = dim === 'angle' ? 'angle' : dim === 'angular-rate' ? 'rate' : undefined;
-  if (implied && row.quantum !== implied) {
-    throw new InputError(`${path}.quantum`, `is "${row.quantum}", but the unit '${row.value.unit}' makes this ${implied === 'angle' ? 'an angle-increment' : 'a rate'} LSB; write "${implied}" or change the unit`);
+  if (!spec || !dim || typeof spec.fallback !== 'function') return;
+  const implied = spec.fallback(dim);
+  if (field === 'quantum' && implied !== undefined && (row as unknown as Record<string, unknown>)[field] !== implied) {
+    throw new InputError(`${path}.${field}`, `is "${String(row.quantum)}", but the unit '${row.value.unit}' makes this ${implied === 'angle' ? 'an angle-increment' : 'a rate'} LSB; write "${implied}" or change the unit`);
   }
 }
 
@@ -38,22 +39,22 @@ function checkQuantum(row: SourceInput, path: string): void {
  * @throws InputError at the field (`sensors[2].landmarks`, `sensors[1].sources[0].quantum`).
  */
 export function refuseUnreadFields(sensor: SensorInput, path: string): void {
-  for (const [field, kinds] of Object.entries(SENSOR_FIELDS)) {
-    if ((sensor as unknown as Record<string, unknown>)[field] !== undefined && !kinds.includes(sensor.kind)) {
-      throw new InputError(`${path}.${field}`, `a ${sensor.kind} sensor does not use "${field}" (only ${list(kinds)} does); remove it or change the sensor's kind`);
+  const spec = SENSOR_KINDS[sensor.kind];
+  if (!spec) return;
+  const read = new Set((spec.settings ?? []).map((s) => ('field' in s ? s.field : s.type)));
+  for (const field of SENSOR_SETTING_FIELDS) {
+    if ((sensor as unknown as Record<string, unknown>)[field] !== undefined && !read.has(field)) {
+      throw new InputError(`${path}.${field}`, `a ${sensor.kind} sensor does not use "${field}"; remove it or change the sensor's kind`);
     }
   }
   (Array.isArray(sensor.sources) ? sensor.sources : []).forEach((row, j) => {
+    if (!row || typeof row !== 'object') return;
     const rowPath = `${path}.sources[${j}]`;
-    for (const [field, rule] of Object.entries(ROW_OPTIONS)) {
-      if ((row as unknown as Record<string, unknown>)?.[field] === undefined) continue;
-      if (rule.sources && !rule.sources.includes(row.kind)) {
-        throw new InputError(`${rowPath}.${field}`, `a "${row.kind}" row does not use "${field}" (only ${list(rule.sources)} rows do); remove it`);
-      }
-      if (rule.sensors && !rule.sensors.includes(sensor.kind)) {
-        throw new InputError(`${rowPath}.${field}`, `a row of a ${sensor.kind} sensor does not use "${field}" (only rows of ${list(rule.sensors)} do); remove it`);
-      }
+    const option = rowOption(sensor, row)?.field;
+    for (const field of OPTION_FIELDS) {
+      if ((row as unknown as Record<string, unknown>)[field] === undefined) continue;
+      if (field !== option) throw new InputError(`${rowPath}.${field}`, `a "${row.kind}" row of a ${sensor.kind} sensor does not use "${field}"; remove it`);
+      checkAgainstUnit(sensor, row, field, rowPath);
     }
-    if (row?.kind === 'quantisation') checkQuantum(row, rowPath);
   });
 }

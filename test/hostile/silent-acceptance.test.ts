@@ -21,14 +21,14 @@ const CASES: { name: string; doc: () => any; field: string; detail: RegExp }[] =
   {
     name: 'quantum-angle-on-wheel-speed.json',
     doc: () => withRow(1, { id: 'lsb', kind: 'quantisation', value: 0.01, unit: 'm/s', quantum: 'angle', provenance: 'hostile case', assumed: true }),
-    field: 'sensors[1].sources[2].quantum', detail: /a row of a wheel-speed sensor does not use "quantum"/,
+    field: 'sensors[1].sources[2].quantum', detail: /a "quantisation" row of a wheel-speed sensor does not use "quantum"/,
   },
   {
     name: 'quantum-contradicting-unit.json',
     doc: () => withRow(0, { id: 'lsb', kind: 'quantisation', value: 0.01, unit: 'deg/s', quantum: 'angle', provenance: 'hostile case', assumed: true }),
     field: 'sensors[0].sources[3].quantum', detail: /makes this a rate LSB; write "rate"/,
   },
-  { name: 'bias-form-on-white-noise.json', doc: () => patched({ 'sensors[0].sources[0].biasForm': 'floor' }), field: 'sensors[0].sources[0].biasForm', detail: /a "white-noise" row does not use "biasForm"/ },
+  { name: 'bias-form-on-white-noise.json', doc: () => patched({ 'sensors[0].sources[0].biasForm': 'floor' }), field: 'sensors[0].sources[0].biasForm', detail: /a "white-noise" row of a yaw-gyro sensor does not use "biasForm"/ },
   { name: 'zero-gnss-noise.json', doc: () => patched({ 'sensors[2].sources[0].value': 0 }), field: 'sensors[2].sources[0].value', detail: /is 0, which tells the filter the gnss measurements are perfect \(R = 0/ },
   { name: 'array-literal.json', doc: () => patched({ [row0]: '={1,2}' }), field: row0, detail: /holds an array literal/ },
   { name: 'row-function.json', doc: () => patched({ [row0]: '=ROW()/10000' }), field: row0, detail: /uses ROW\(\), which depends on where the cell sits in the hidden sheet/ },
