@@ -6,5 +6,7 @@ export default defineConfig({
     include: ['test/**/*.test.ts'],
     exclude: ['test/web/**', 'node_modules/**'],
     environment: 'node',
+    // Property tests and the 3-D reference scenarios take seconds on a busy 2-core machine: a timeout is not a wrong answer.
+    testTimeout: 120_000,
   },
 });

@@ -20,7 +20,9 @@ export { buildNominalTrajectory, type NominalTrajectory } from './mission/nomina
 export type { ErrorModel, ModelSource, StateInfo } from './covariance/error-model';
 export { discretiseVanLoan } from './covariance/van-loan';
 export { expm } from './covariance/matrix-exponential';
-export { runCovariance, type CovarianceHistory } from './covariance/run-covariance';
+export {
+  runCovariance, runCovarianceProblem, type CovarianceHistory, type CovarianceProblem, type CovarianceRun, type DiscretisationProvider,
+} from './covariance/run-covariance';
 export type { CovarianceIssue } from './covariance/covariance-health';
 export { buildBudgetSeries, VARIANCE_QUANTITIES, type BudgetSeries, type VarianceQuantity } from './budget/budget-series';
 export { radiusForProbability, probabilityInsideCircle } from './budget/horizontal-accuracy';
@@ -30,3 +32,12 @@ export type { RequirementResult, OutageHold } from './budget/requirements';
 export type { CheckpointBudget, QuantityBudget, SourceShare } from './budget/checkpoints';
 export { sizeSource, type SizingResult } from './budget/sizing';
 export { computeBudget, MAX_STEPS, type BudgetResult } from './pipeline';
+export * from './inertial';
+export type { MonteCarloModel, RunSink, SimulatedQuantity, NeesGroup, SimulatedOutage } from './simulation/monte-carlo-model';
+export { RunRandom } from './simulation/run-random';
+export { planarSimulation } from './simulation/planar-study';
+export { runBlocks, type BlockRange } from './simulation/run-blocks';
+export { RUNS_PER_BLOCK, blockCount, shardBlocks, reduceNodes, type BlockNode } from './simulation/block-tree';
+export { studyStatistics, type StudyStatistics, type QuantityStatistics, type NeesStatistics } from './simulation/study-statistics';
+export { findFlags, type SimulationFlag } from './simulation/study-flags';
+export { simulationVerdict, simulationJson, formatSimulationSummary, type StudyIdentity } from './simulation/simulation-report';

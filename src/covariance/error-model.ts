@@ -54,6 +54,8 @@ export interface ModelSource {
   headingOutputVarianceSI: number;
   /** Per-sample white variance added to the speed output while moving, (m/s)². */
   speedOutputVarianceSI: number;
+  /** A quantisation row's LSB in SI (rad/s, m/s or rad), so a simulation can round the output instead of adding noise. */
+  quantumSI?: number;
   conversions: ConversionStep[];
   /** Values flagged as assumptions (for example a pre-filled correlation time). */
   assumptions: string[];
@@ -83,6 +85,14 @@ export interface ScalarMeasurement {
   hEast: number;
   /** Sensitivity to other states, as (state index, coefficient). */
   hStates: [number, number][];
+  /**
+   * The noise-free nonlinear measurement at the geometry asked for, SI (m or
+   * rad), before the additive bias states in `hStates`: what a simulation
+   * measures from the true pose and predicts from its estimate.
+   */
+  ideal: number;
+  /** True for an angle (compass heading, bearing): differences wrap to (-π, π]. */
+  wraps: boolean;
 }
 
 /** Geometry the measurement models see at a processing instant. */
@@ -90,6 +100,12 @@ export interface MeasurementGeometry {
   northM: number;
   eastM: number;
   headingRad: number;
+  /**
+   * True to return every row whatever the sensor's range and field of view:
+   * a simulated filter predicts, from its own estimate, each measurement the
+   * sensor made from the true pose.
+   */
+  everyRow?: boolean;
 }
 
 /** An aiding sensor's measurement schedule. */
@@ -122,6 +138,8 @@ export interface ErrorModel {
   dynamics(speedMps: number, turnRateRadps: number): Float64Array;
   /** True when the suite has a speed input (speed outputs exist). */
   hasSpeedInput: boolean;
+  /** Output rates of the yaw gyro and the speed sensor, Hz (0 when absent; aiding sensors carry theirs in `streams`). */
+  deadReckoningRateHz: { gyro: number; speed: number };
   /** SI unit of what each measurement measures, by noise key (`gnss.north` -> `m`), as the sensor kinds declare it. */
   measurementUnitsSI: Readonly<Record<string, string>>;
 }

@@ -1,4 +1,4 @@
-import type { ErrorModel } from './error-model';
+import type { ErrorModel, MeasurementNoisePiece } from './error-model';
 import { TIME_SLACK_S, type NominalTrajectory } from '../mission/nominal-trajectory';
 
 /** One scalar measurement to process at a step boundary, with h in the model's states. */
@@ -63,11 +63,12 @@ export function scheduleMeasurements(model: ErrorModel, traj: NominalTrajectory)
 }
 
 /** R of one measurement key: its owners and their variances (shared by every event of that key). */
-type NoiseOwners = Pick<ScheduledMeasurement, 'rSources' | 'rVariances' | 'rTotal'>;
+export type NoiseOwners = Pick<ScheduledMeasurement, 'rSources' | 'rVariances' | 'rTotal'>;
 
-const NO_NOISE: NoiseOwners = { rSources: new Int32Array(0), rVariances: new Float64Array(0), rTotal: 0 };
+export const NO_NOISE: NoiseOwners = { rSources: new Int32Array(0), rVariances: new Float64Array(0), rTotal: 0 };
 
-function noiseByKey(model: ErrorModel): Map<string, NoiseOwners> {
+/** Each measurement key's R owners, from every source's R pieces (any model whose sources carry them). */
+export function noiseByKey(model: { sources: readonly { measurementNoise: readonly MeasurementNoisePiece[] }[] }): Map<string, NoiseOwners> {
   const lists = new Map<string, { sources: number[]; variances: number[] }>();
   model.sources.forEach((src, s) => {
     for (const piece of src.measurementNoise) {

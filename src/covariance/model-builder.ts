@@ -29,6 +29,7 @@ export class ModelBuilder {
   readonly core: CoreStates;
   private readonly measurementUnits: Record<string, string> = {};
   hasSpeedInput = false;
+  readonly deadReckoningRateHz = { gyro: 0, speed: 0 };
 
   constructor() {
     this.core = {
@@ -101,6 +102,7 @@ export class ModelBuilder {
       sources: this.sources.slice(),
       streams: this.streams.slice(),
       hasSpeedInput: this.hasSpeedInput,
+      deadReckoningRateHz: { ...this.deadReckoningRateHz },
       measurementUnitsSI: { ...this.measurementUnits },
       dynamics(speedMps: number, turnRateRadps: number): Float64Array {
         const f = new Float64Array(n * n);

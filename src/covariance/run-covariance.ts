@@ -7,10 +7,12 @@ import { checkCovariance, type CovarianceIssue } from './covariance-health';
 import type { StepDiscretisation } from './discretise-step';
 import { DiscretisationCache } from './discretisation-cache';
 import { scheduleMeasurements, type ScheduledMeasurement } from './measurement-schedule';
-import { initialiseStorage, planSourceStorage, sourceEntry, sourceMatrix, type SourceStorage } from './source-storage';
+import {
+  initialiseStorage, planSourceStorage, sourceEntry, sourceMatrix, type SourceStorage, type StoredModel,
+} from './source-storage';
 
 /**
- * The entries of P the outputs need, per step, for the total (row 0) and
+ * The entries of P the planar outputs need, per step, for the total (row 0) and
  * each source (row s + 1): arrays of length (sources + 1) * steps.
  */
 export interface RecordedEntries {
@@ -22,12 +24,37 @@ export interface RecordedEntries {
   speedScale: Float64Array;
 }
 
-/** What the covariance run produces. */
-export interface CovarianceHistory {
+/** What carries P from t_{k-1} to t_k: one or more discretisations applied in order (k asked for in increasing order). */
+export interface DiscretisationProvider {
+  forStep(k: number): readonly StepDiscretisation[];
+}
+
+/**
+ * A linear error-state model as the covariance run sees it, whatever its
+ * physics (the planar model of docs/planar-model.md, the inertial one of
+ * docs/inertial-model.md): states, sources with their P0 / Q_d / R pieces,
+ * how each step is discretised, what is measured when, and which entries of
+ * P are recorded for the outputs.
+ */
+export interface CovarianceProblem extends StoredModel {
+  /** Step times t_k, s. */
+  tS: Float64Array;
+  discretisation: DiscretisationProvider;
+  /** The scalar measurements processed at boundary k, in order. */
+  measurementsAt(k: number): readonly ScheduledMeasurement[];
+  /** Entries P[i][j] recorded at every step for the total and each source. */
+  recordedPairs: readonly (readonly [number, number])[];
+  /** States whose total sigma is recorded at every step. */
+  calibrationStates: readonly number[];
+}
+
+/** What a run of a {@link CovarianceProblem} produces. */
+export interface CovarianceRun {
   steps: number;
   /** Sources with recorded contributions (0 when run without them). */
   sourceCount: number;
-  entries: RecordedEntries;
+  /** One array per recorded pair: P[i][j] of the total at [k], of source s at [(s + 1) * steps + k]. */
+  recorded: Float64Array[];
   /** Calibration states' total sigma per step: one Float64Array per state index listed in `calibrationStates`. */
   calibrationStates: number[];
   calibrationSigma: Float64Array[];
@@ -39,6 +66,11 @@ export interface CovarianceHistory {
   measurementCounts: Record<string, number>;
   /** Numerical problems, first occurrence of each kind; empty when healthy. */
   issues: CovarianceIssue[];
+}
+
+/** What the planar covariance run produces. */
+export interface CovarianceHistory extends Omit<CovarianceRun, 'recorded'> {
+  entries: RecordedEntries;
 }
 
 /** Options of {@link runCovariance}. */
@@ -64,45 +96,66 @@ interface RunState {
 }
 
 /**
- * Runs the covariance analysis with per-source contributions (docs/planar-model.md §6,
- * §7): the total P drives the gains; every source's P_s goes through the
- * same Φ and gains with only its own P0, Q_d and R pieces, so Σ P_s = P.
+ * Runs the planar covariance analysis (docs/planar-model.md §6, §7) through
+ * {@link runCovarianceProblem}: per-segment discretisations, the measurement
+ * schedule, and the along/cross/heading/speed-scale entries recorded.
  */
 export function runCovariance(model: ErrorModel, traj: NominalTrajectory, options: RunOptions = {}): CovarianceHistory {
-  const contributions = options.contributions !== false;
-  const n = model.states.length;
-  const S = contributions ? model.sources.length : 0;
-  const steps = traj.tS.length;
   const schedule = scheduleMeasurements(model, traj);
-  const plan = planSourceStorage(model, contributions);
+  const { along, cross, heading, speedScale } = model.core;
+  const pairs: [number, number][] = [[along, along], [cross, cross], [along, cross], [heading, heading]];
+  if (speedScale >= 0) pairs.push([speedScale, speedScale]);
+  const run = runCovarianceProblem({
+    states: model.states, sources: model.sources, tS: traj.tS, discretisation: new DiscretisationCache(model, traj),
+    measurementsAt: (k) => schedule[k], recordedPairs: pairs,
+    calibrationStates: model.states.flatMap((s, i) => (s.calibration ? [i] : [])),
+  }, options);
+  const { recorded, ...rest } = run;
+  const entries: RecordedEntries = {
+    alongAlong: recorded[0], crossCross: recorded[1], alongCross: recorded[2], headingHeading: recorded[3],
+    speedScale: speedScale >= 0 ? recorded[4] : new Float64Array(recorded[0].length),
+  };
+  return { ...rest, entries };
+}
+
+/**
+ * Runs the covariance analysis with per-source contributions (docs/planar-model.md
+ * §6, §7): the total P drives the gains; every source's P_s goes through the
+ * same Φ and gains with only its own P0, Q_d and R pieces, so Σ P_s = P.
+ */
+export function runCovarianceProblem(problem: CovarianceProblem, options: RunOptions = {}): CovarianceRun {
+  const contributions = options.contributions !== false;
+  const n = problem.states.length;
+  const S = contributions ? problem.sources.length : 0;
+  const steps = problem.tS.length;
+  const plan = planSourceStorage(problem, contributions);
   const st: RunState = {
     n, plan, mats: new Float64Array(plan.denseCount * n * n), vecs: new Float64Array(Math.max(1, plan.vectors) * n),
     scratch: new Float64Array(n * n), u: new Float64Array(n), gain: new Float64Array(n), rOfSlot: new Float64Array(plan.denseCount),
   };
-  initialiseStorage(model, plan, st.mats, st.vecs, contributions);
-  const rec = allocateEntries((S + 1) * steps);
-  const calibrationStates = model.states.flatMap((s, i) => (s.calibration ? [i] : []));
+  initialiseStorage(problem, plan, st.mats, st.vecs, contributions);
+  const recorded = problem.recordedPairs.map(() => new Float64Array((S + 1) * steps));
+  const calibrationStates = [...problem.calibrationStates];
   const calibrationSigma = calibrationStates.map(() => new Float64Array(steps));
   const issues: CovarianceIssue[] = [];
   const counts: Record<string, number> = {};
-  const cache = new DiscretisationCache(model, traj);
 
   for (let k = 0; k < steps; k++) {
-    if (k > 0) for (const d of cache.forStep(k)) propagateAll(st, d);
-    for (const m of schedule[k]) {
+    if (k > 0) for (const d of problem.discretisation.forStep(k)) propagateAll(st, d);
+    for (const m of problem.measurementsAt(k)) {
       if (updateAll(st, m)) counts[m.sensorId] = (counts[m.sensorId] ?? 0) + 1;
-      else noteIssue(issues, { kind: 'singular-innovation', tS: traj.tS[k], detail: `${m.key}: innovation variance is not positive` });
+      else noteIssue(issues, { kind: 'singular-innovation', tS: problem.tS[k], detail: `${m.key}: innovation variance is not positive` });
     }
-    record(model, st, S, k, steps, rec);
+    record(st, problem.recordedPairs, S, k, steps, recorded);
     calibrationStates.forEach((i, c) => (calibrationSigma[c][k] = Math.sqrt(Math.max(0, st.mats[i * n + i]))));
     // The full check (an LDLᵀ) every tenth step and at the end: a problem is reported within a second of mission time.
     if (k % HEALTH_CHECK_EVERY === 0 || k === steps - 1) {
-      const issue = checkCovariance(st.mats, 0, n, traj.tS[k], st.scratch);
+      const issue = checkCovariance(st.mats, 0, n, problem.tS[k], st.scratch);
       if (issue) noteIssue(issues, issue);
     }
   }
   return {
-    steps, sourceCount: S, entries: rec, calibrationStates, calibrationSigma,
+    steps, sourceCount: S, recorded, calibrationStates, calibrationSigma,
     finalCovariance: st.mats.slice(0, n * n),
     finalSourceCovariances: Array.from({ length: S }, (_, s) => sourceMatrix(plan, st.mats, st.vecs, n, s)),
     measurementCounts: counts, issues,
@@ -143,32 +196,18 @@ function updateAll(st: RunState, m: ScheduledMeasurement): boolean {
   return true;
 }
 
-function allocateEntries(len: number): RecordedEntries {
-  return {
-    alongAlong: new Float64Array(len), crossCross: new Float64Array(len), alongCross: new Float64Array(len),
-    headingHeading: new Float64Array(len), speedScale: new Float64Array(len),
-  };
-}
-
-function record(model: ErrorModel, st: RunState, S: number, k: number, steps: number, rec: RecordedEntries): void {
+function record(
+  st: RunState, pairs: readonly (readonly [number, number])[], S: number, k: number, steps: number, out: Float64Array[],
+): void {
   const { n, mats, vecs, plan } = st;
-  const { along, cross, heading, speedScale } = model.core;
   for (let m = 0; m <= S; m++) {
     const at = m * steps + k;
     const slot = m === 0 ? 0 : plan.denseSlot[m - 1];
     if (slot >= 0) {
       const o = slot * n * n;
-      rec.alongAlong[at] = mats[o + along * n + along];
-      rec.crossCross[at] = mats[o + cross * n + cross];
-      rec.alongCross[at] = mats[o + along * n + cross];
-      rec.headingHeading[at] = mats[o + heading * n + heading];
-      rec.speedScale[at] = speedScale >= 0 ? mats[o + speedScale * n + speedScale] : 0;
+      for (let p = 0; p < pairs.length; p++) out[p][at] = mats[o + pairs[p][0] * n + pairs[p][1]];
     } else {
-      rec.alongAlong[at] = sourceEntry(plan, mats, vecs, n, m - 1, along, along);
-      rec.crossCross[at] = sourceEntry(plan, mats, vecs, n, m - 1, cross, cross);
-      rec.alongCross[at] = sourceEntry(plan, mats, vecs, n, m - 1, along, cross);
-      rec.headingHeading[at] = sourceEntry(plan, mats, vecs, n, m - 1, heading, heading);
-      rec.speedScale[at] = speedScale >= 0 ? sourceEntry(plan, mats, vecs, n, m - 1, speedScale, speedScale) : 0;
+      for (let p = 0; p < pairs.length; p++) out[p][at] = sourceEntry(plan, mats, vecs, n, m - 1, pairs[p][0], pairs[p][1]);
     }
   }
 }

@@ -1,4 +1,13 @@
-import type { ErrorModel } from './error-model';
+import type { ModelSource } from './error-model';
+
+/** What storage needs to know of a source: its P0 entries, and whether it owns any Q or R. */
+export type StoredSource = Pick<ModelSource, 'initialVariance'> & { noise: readonly unknown[]; measurementNoise: readonly unknown[] };
+
+/** The states and sources a run stores (the planar ErrorModel is one). */
+export interface StoredModel {
+  states: { length: number };
+  sources: readonly StoredSource[];
+}
 
 /**
  * Where each source's covariance lives during a run: a dense n x n matrix
@@ -19,7 +28,7 @@ export interface SourceStorage {
 }
 
 /** Decides the storage of every source; `contributions: false` keeps the total only. */
-export function planSourceStorage(model: ErrorModel, contributions: boolean): SourceStorage {
+export function planSourceStorage(model: StoredModel, contributions: boolean): SourceStorage {
   const S = model.sources.length;
   const plan: SourceStorage = {
     denseSlot: new Int32Array(S).fill(-1), firstVector: new Int32Array(S), vectorCount: new Int32Array(S),
@@ -41,7 +50,7 @@ export function planSourceStorage(model: ErrorModel, contributions: boolean): So
 }
 
 /** Fills the dense matrices and vectors with each source's P0 (and the total with all of them). */
-export function initialiseStorage(model: ErrorModel, plan: SourceStorage, mats: Float64Array, vecs: Float64Array, contributions: boolean): void {
+export function initialiseStorage(model: StoredModel, plan: SourceStorage, mats: Float64Array, vecs: Float64Array, contributions: boolean): void {
   const n = model.states.length, nn = n * n;
   model.sources.forEach((src, s) => {
     src.initialVariance.forEach(({ state, varianceSI }, j) => {

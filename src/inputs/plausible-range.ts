@@ -37,6 +37,7 @@ export const PLAUSIBLE_RANGES: Record<DimensionName, PlausibleRange> = {
   'length': { maxSI: 4.0075e7, maxReason: "the Earth's equatorial circumference, 40 075 km (WGS 84)" },
   'speed': { maxSI: 343, maxReason: 'the speed of sound in air at 20 °C, 343 m/s, which none of these vehicles reaches' },
   'velocity-random-walk': { maxSI: 10, maxReason: `a thousand times a consumer MEMS accelerometer ${NO_SOURCE}` },
+  'acceleration-random-walk': { maxSI: 1, maxReason: `far above any accelerometer datasheet's bias random walk ${NO_SOURCE}` },
   'acceleration': { maxSI: 16 * 9.80665, maxReason: `the widest full scale of common MEMS accelerometers, ±16 g ${NO_SOURCE}` },
   'length-random-walk': { maxSI: 343, maxReason: `a speed noise as large as the speed of sound in one second ${NO_SOURCE}` },
   'ratio': { maxSI: 1, maxReason: `a scale-factor error of 100 %, a sensor reading double or nothing ${NO_SOURCE}` },

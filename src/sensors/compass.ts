@@ -1,6 +1,6 @@
 import type { SensorInput } from '../inputs/budget-input';
 import { emptySource, type ModelBuilder } from '../covariance/model-builder';
-import type { ScalarMeasurement } from '../covariance/error-model';
+import type { MeasurementGeometry, ScalarMeasurement } from '../covariance/error-model';
 import { resolveRandomConstant } from '../sources/turn-on-bias';
 import { resolveWhiteNoise } from '../sources/white-noise';
 import { defineSensorKind, eachRow, resolveOutages, sensorRateHz, type Placement, type SensorContext, type SensorKindSpec } from './sensor-kind';
@@ -45,10 +45,12 @@ export const compass: SensorKindSpec<'compass'> = defineSensorKind({
       }
       b.sources.push(src);
     });
-    const rows: ScalarMeasurement[] = [{ key, noiseKey: key, hNorth: 0, hEast: 0, hStates }];
+    const rowsAt = (g: MeasurementGeometry): ScalarMeasurement[] => [
+      { key, noiseKey: key, hNorth: 0, hEast: 0, hStates, ideal: g.headingRad, wraps: true },
+    ];
     return {
       states: { bias: b.stateIndex(`${sensor.id}#bias`) },
-      measurements: (builder) => builder.streams.push({ sensorId: sensor.id, rateHz, outages, rowsAt: () => rows }),
+      measurements: (builder) => builder.streams.push({ sensorId: sensor.id, rateHz, outages, rowsAt }),
     };
   },
 });

@@ -1,6 +1,6 @@
 import type { SensorInput } from '../inputs/budget-input';
 import { emptySource, type ModelBuilder } from '../covariance/model-builder';
-import type { ScalarMeasurement } from '../covariance/error-model';
+import type { MeasurementGeometry, ScalarMeasurement } from '../covariance/error-model';
 import { resolveMultipath } from '../sources/multipath';
 import { resolveWhiteNoise } from '../sources/white-noise';
 import { defineSensorKind, eachRow, resolveOutages, sensorRateHz, type Placement, type SensorContext, type SensorKindSpec } from './sensor-kind';
@@ -63,13 +63,15 @@ export const gnssPosition: SensorKindSpec<'gnss-position'> = defineSensorKind({
       }
       b.sources.push(src);
     });
-    const rows: ScalarMeasurement[] = [
-      { key: keyN, noiseKey: keyN, hNorth: 1, hEast: 0, hStates: multipathN.map((s) => [s, 1] as [number, number]) },
-      { key: keyE, noiseKey: keyE, hNorth: 0, hEast: 1, hStates: multipathE.map((s) => [s, 1] as [number, number]) },
+    const hN = multipathN.map((s) => [s, 1] as [number, number]);
+    const hE = multipathE.map((s) => [s, 1] as [number, number]);
+    const rowsAt = (g: MeasurementGeometry): ScalarMeasurement[] => [
+      { key: keyN, noiseKey: keyN, hNorth: 1, hEast: 0, hStates: hN, ideal: g.northM, wraps: false },
+      { key: keyE, noiseKey: keyE, hNorth: 0, hEast: 1, hStates: hE, ideal: g.eastM, wraps: false },
     ];
     return {
       states: { multipathNorth: multipathN, multipathEast: multipathE },
-      measurements: (builder) => builder.streams.push({ sensorId: sensor.id, rateHz, outages, rowsAt: () => rows }),
+      measurements: (builder) => builder.streams.push({ sensorId: sensor.id, rateHz, outages, rowsAt }),
     };
   },
 });

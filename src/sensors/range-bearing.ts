@@ -74,16 +74,20 @@ export const rangeBearing: SensorKindSpec<'range-bearing'> = defineSensorKind({
       for (const lm of landmarks) {
         const dN = lm.northM - g.northM, dE = lm.eastM - g.eastM;
         const r = Math.hypot(dN, dE);
-        if (r > maxRangeM) continue;
-        if (Math.abs(wrapAngle(Math.atan2(dE, dN) - g.headingRad)) > fovRad / 2 + 1e-12) continue;
+        if (!g.everyRow && r > maxRangeM) continue;
+        if (!g.everyRow && Math.abs(wrapAngle(Math.atan2(dE, dN) - g.headingRad)) > fovRad / 2 + 1e-12) continue;
         if (r < MIN_LANDMARK_RANGE_M) throw new InputError(lm.path, `lies on the vehicle's nominal path (range ${r.toExponential(2)} m); move it off the path`);
         if (observables !== 'bearing') {
-          rows.push({ key: `${sensor.id}.range.${lm.id}`, noiseKey: `${sensor.id}.range`, hNorth: -dN / r, hEast: -dE / r, hStates: bias.range });
+          rows.push({
+            key: `${sensor.id}.range.${lm.id}`, noiseKey: `${sensor.id}.range`, hNorth: -dN / r, hEast: -dE / r, hStates: bias.range,
+            ideal: r, wraps: false,
+          });
         }
         if (observables !== 'range') {
           rows.push({
             key: `${sensor.id}.bearing.${lm.id}`, noiseKey: `${sensor.id}.bearing`,
             hNorth: dE / (r * r), hEast: -dN / (r * r), hStates: [[b.core.heading, -1], ...bias.bearing],
+            ideal: wrapAngle(Math.atan2(dE, dN) - g.headingRad), wraps: true,
           });
         }
       }

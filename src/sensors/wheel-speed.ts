@@ -33,6 +33,7 @@ export const wheelSpeed: SensorKindSpec<'wheel-speed'> = defineSensorKind({
   place(b: ModelBuilder, sensor: SensorInput, ctx: SensorContext): Placement<'wheel-speed'> {
     refuseOutages(sensor, ctx.path);
     const rateHz = sensorRateHz(sensor, ctx.path);
+    b.deadReckoningRateHz.speed = rateHz;
     const along = b.core.along;
     b.hasSpeedInput = true;
     eachRow(wheelSpeed, sensor, ctx, (row, path) => {
@@ -49,6 +50,7 @@ export const wheelSpeed: SensorKindSpec<'wheel-speed'> = defineSensorKind({
           : resolveQuantisation(row, 'speed', rateHz, path);
         src.noise.push({ channel: b.channel('speed noise', along), psdSI: r.psdSI, onlyWhileMoving: true, derivation: r.derivation });
         src.speedOutputVarianceSI += r.perSampleVarianceSI;
+        if (row.kind === 'quantisation') src.quantumSI = Math.sqrt(12 * r.perSampleVarianceSI);
         src.conversions.push(...r.conversions);
       }
       b.sources.push(src);

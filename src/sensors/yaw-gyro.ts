@@ -52,6 +52,7 @@ export const yawGyro: SensorKindSpec<'yaw-gyro'> = defineSensorKind({
   place(b: ModelBuilder, sensor: SensorInput, ctx: SensorContext): Placement<'yaw-gyro'> {
     refuseOutages(sensor, ctx.path);
     const rateHz = sensorRateHz(sensor, ctx.path);
+    b.deadReckoningRateHz.gyro = rateHz;
     eachRow(yawGyro, sensor, ctx, (row, path) => {
       const src = emptySource(`${sensor.id}.${row.id}`, sensor.id, row.kind, row.id, row);
       placeGyroRow(b, src, sensor.id, row, rateHz, path);
@@ -104,6 +105,7 @@ function placeGyroRow(b: ModelBuilder, src: ModelSource, sensorId: string, row: 
     case 'quantisation': {
       const dim = pickDimension(row.value, [...yawGyro.rows.quantisation!], `${path}.value`);
       const r = resolveQuantisation(row, dim, rateHz, path);
+      src.quantumSI = Math.sqrt(12 * r.perSampleVarianceSI);
       if (dim === 'angle') src.headingOutputVarianceSI += r.perSampleVarianceSI;
       else src.noise.push({ channel: b.channel('gyro rate noise', h), psdSI: r.psdSI, onlyWhileMoving: false, derivation: r.derivation });
       src.conversions.push(...r.conversions);

@@ -10,16 +10,8 @@
 import { computeBudget } from '../../src/pipeline';
 import type { BudgetInput } from '../../src/inputs/budget-input';
 import { scenarioR2 } from '../fixtures/reference-scenarios';
+import { growthExponent } from './growth-exponent';
 import { medianMs } from './median-time';
-
-/** Least-squares slope of log(time) against log(size). */
-function growthExponent(points: [number, number][]): number {
-  const xs = points.map(([x]) => Math.log(x)), ys = points.map(([, y]) => Math.log(y));
-  const mx = xs.reduce((a, b) => a + b) / xs.length, my = ys.reduce((a, b) => a + b) / ys.length;
-  let sxy = 0, sxx = 0;
-  xs.forEach((x, i) => { sxy += (x - mx) * (ys[i] - my); sxx += (x - mx) ** 2; });
-  return sxy / sxx;
-}
 
 function scaledMission(factor: number): BudgetInput {
   const b = scenarioR2();

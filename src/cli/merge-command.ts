@@ -1,0 +1,40 @@
+/**
+ * `sigma-ledger merge PARTS... [--json] [--every K] [--output OUT]`: combines
+ * the part files of a sharded `simulate` into exactly the result one machine
+ * would print (the sums meet in the same fixed tree, block-tree.ts). The
+ * budget file named in the parts must be at hand, unchanged (its SHA-256 is
+ * checked), for the predicted σ.
+ */
+import { writeFileSync } from 'node:fs';
+import { InputError } from '../errors';
+import { blockCount, reduceNodes } from '../simulation/block-tree';
+import { planarSimulation } from '../simulation/planar-study';
+import { sumLayout } from '../simulation/study-sums';
+import { exitOnInputError, type Io } from './commands';
+import { loadBudget, withDocumentPaths } from './load-budget';
+import { finishStudy } from './simulation-output';
+import { readPart, studyIdentity } from './simulation-parts';
+
+/** Runs `merge`: exit 0 consistent, 1 with warnings, 2 for parts that do not belong together or leave runs out. */
+export async function mergeCommand(parts: string[], opts: { json: boolean; every: number; output?: string }, io: Io): Promise<number> {
+  return exitOnInputError(io, async () => {
+    if (parts.length === 0) throw new InputError('merge', 'give the part files written by simulate --shard');
+    const read = parts.map((p) => ({ path: p, part: readPart(p) }));
+    const first = read[0].part;
+    for (const { path, part } of read) {
+      const same = part.id.budget.sha256 === first.id.budget.sha256 && part.id.seed === first.id.seed && part.id.runs === first.id.runs;
+      if (!same) throw new InputError(path, `is from another study (budget, seed or runs differ from ${read[0].path})`);
+    }
+    const id = studyIdentity(first.id.budget.file, first.id.seed, first.id.runs);
+    if (id.budget.sha256 !== first.id.budget.sha256) {
+      throw new InputError(first.id.budget.file, 'has changed since the parts were simulated (its SHA-256 differs); simulate again');
+    }
+    const model = withDocumentPaths(loadBudget(id.budget.file), (input) => planarSimulation(input));
+    const fields = sumLayout(model).fields;
+    const size = sumLayout(model).steps * fields;
+    const bad = read.find(({ part }) => part.fieldsPerStep !== fields || part.nodes.some((n) => n.sums.data.length !== size));
+    if (bad) throw new InputError(bad.path, `does not hold sums of this budget's ${sumLayout(model).steps} steps × ${fields} fields`);
+    const sums = reduceNodes(read.flatMap((r) => r.part.nodes), blockCount(id.runs));
+    return finishStudy(model, id, sums, opts, io, (p, t) => writeFileSync(p, t));
+  });
+}

@@ -1,0 +1,26 @@
+/**
+ * A worker thread of `simulate`: loads the budget, simulates its block range
+ * and posts progress every few runs and the resulting nodes (their buffers
+ * transferred, not copied).
+ */
+import { parentPort, workerData } from 'node:worker_threads';
+import { runBlocks, type BlockRange } from '../simulation/run-blocks';
+import { planarSimulation } from '../simulation/planar-study';
+import { loadBudget, withDocumentPaths } from './load-budget';
+
+/** What the main thread sends a worker. */
+export interface WorkerJob extends BlockRange {
+  file: string;
+}
+
+const PROGRESS_EVERY_RUNS = 4;
+
+const job = workerData as WorkerJob;
+const loaded = loadBudget(job.file);
+const model = withDocumentPaths(loaded, (input) => planarSimulation(input));
+let done = 0;
+const nodes = runBlocks(model, job, () => {
+  if (++done % PROGRESS_EVERY_RUNS === 0) parentPort!.postMessage({ kind: 'progress', runs: PROGRESS_EVERY_RUNS });
+});
+parentPort!.postMessage({ kind: 'progress', runs: done % PROGRESS_EVERY_RUNS });
+parentPort!.postMessage({ kind: 'done', nodes }, nodes.map((n) => n.sums.data.buffer as ArrayBuffer));
