@@ -10,7 +10,8 @@ import { documentPathOf } from './sheet/input-paths';
 import type { SheetEvaluation } from './sheet/sheet-evaluation';
 import type { BudgetInput } from './inputs/budget-input';
 import { SigmaLedgerError } from './errors';
-import { computeBudget, type BudgetResult } from './pipeline';
+import { dropRefusedItems } from './sheet/drop-refused-items';
+import { computeBudget, prepareBudget, type BudgetResult } from './pipeline';
 import { buildJsonResult, type JsonResult } from './report/json-result';
 
 /** Options of {@link analyseDocument}; every one may be left out. */
@@ -60,7 +61,7 @@ export interface DocumentAnalysis {
  * Bad cells and engine input errors come back in the result, never as a throw.
  */
 export function analyseParsedDocument(doc: BudgetDocument, notes: string[], options: AnalyseOptions = {}): DocumentAnalysis {
-  const sheet = (options.evaluate ?? evaluateBudgetDocument)(doc);
+  const sheet = (options.evaluate ?? evaluateDroppingRefused)(doc);
   const partial = sheet.cellErrors.length > 0 || sheet.omitted.length > 0;
   const title = doc.title + (partial ? ' (PARTIAL: cells with errors were left out)' : '');
   const base = { document: doc, notes, sheet, partial, title };
@@ -80,4 +81,9 @@ export function analyseParsedDocument(doc: BudgetDocument, notes: string[], opti
 function reportEvery(budget: BudgetResult, report: { every?: number; maxPoints?: number } = {}): number {
   if (report.maxPoints) return Math.max(report.every ?? 1, Math.ceil(budget.trajectory.tS.length / report.maxPoints));
   return report.every ?? 1;
+}
+
+/** Evaluates the cells, then leaves out (in place, like cell errors) the items the engine refuses, e.g. a unit of the wrong kind for its row. */
+function evaluateDroppingRefused(doc: BudgetDocument): SheetEvaluation {
+  return dropRefusedItems(doc, evaluateBudgetDocument(doc), (input) => prepareBudget(input));
 }

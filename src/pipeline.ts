@@ -3,16 +3,20 @@ import { positiveToSI, requireOneOf } from './inputs/checks';
 import type { BudgetInput, ConfidenceLevel } from './inputs/budget-input';
 import { LEVELS } from './budget/levels';
 import { resolveMission, type ResolvedMission } from './mission/resolve-mission';
-import { buildNominalTrajectory, type NominalTrajectory } from './mission/nominal-trajectory';
+import { buildNominalTrajectory, stepTimes, type NominalTrajectory } from './mission/nominal-trajectory';
 import { buildErrorModel } from './sensors/build-error-model';
+import { refuseZeroMeasurementNoise } from './sensors/measurement-noise-check';
 import type { ErrorModel } from './covariance/error-model';
 import { runCovariance, type CovarianceHistory } from './covariance/run-covariance';
+import { estimateWork, refuseExcessiveWork, WORK_LIMITS } from './covariance/work-estimate';
 import { buildBudgetSeries, type BudgetSeries } from './budget/budget-series';
-import { evaluateRequirement, resolveRequirements, type RequirementResult } from './budget/requirements';
+import { evaluateRequirement, resolveRequirements, type RequirementResult, type ResolvedRequirement } from './budget/requirements';
+import { refuseWindowsWithoutSteps } from './budget/window-steps';
+import { coarseLsbWarnings, type ModelWarning } from './budget/coarse-lsb';
 import { checkpointBudgets, type CheckpointBudget } from './budget/checkpoints';
 
 /** Most steps one analysis may take (a 2-hour mission at 0.01 s); keeps a typo in the step from hanging the page. */
-export const MAX_STEPS = 720_000;
+export const MAX_STEPS = WORK_LIMITS.steps;
 
 /** Everything one analysis produces. */
 export interface BudgetResult {
@@ -25,28 +29,54 @@ export interface BudgetResult {
   checkpoints: CheckpointBudget[];
   /** Level at which reports show budget-table values (settings.level; default 1sigma). */
   reportLevel: ConfidenceLevel;
+  /** Rows the analysis ran with but models optimistically (an LSB coarser than the motion); shown with the status. */
+  warnings: ModelWarning[];
+}
+
+/** A budget resolved and checked up to the covariance run. */
+export interface PreparedBudget {
+  mission: ResolvedMission;
+  stepS: number;
+  model: ErrorModel;
+  requirementSpecs: ResolvedRequirement[];
 }
 
 /**
- * Datasheet rows to budgets: resolve the mission, assemble the error model,
- * sample the nominal path, run the covariance analysis with per-source
- * contributions (unless `contributions: false`, which runs the total alone,
- * several times faster), then read requirements and checkpoints off the series.
+ * Everything before the covariance run: resolve the mission and the step,
+ * assemble the error model, refuse an aiding sensor with R = 0 and work over the limits, resolve the
+ * requirements and check that each window holds a step. Cheap (no
+ * propagation), so callers can use it to find every refused item first.
  * @throws InputError (a {@link SigmaLedgerError}) naming the bad field.
  */
-export function computeBudget(input: BudgetInput, options: { contributions?: boolean } = {}): BudgetResult {
+export function prepareBudget(input: BudgetInput, options: { contributions?: boolean } = {}): PreparedBudget {
   if (!input || typeof input !== 'object') throw new InputError('', 'the budget must be an object');
   const mission = resolveMission(input.mission);
   const stepS = resolveStep(input, mission.durationS);
   const model = buildErrorModel(input.sensors, mission, input.mission.initialSigmaNotes);
+  refuseZeroMeasurementNoise(model, input.sensors);
+  refuseExcessiveWork(estimateWork(model, input.sensors, mission.durationS, stepS, options), model, input.sensors);
   const requirementSpecs = resolveRequirements(input.requirements, mission.durationS);
+  refuseWindowsWithoutSteps(requirementSpecs, stepTimes(mission.durationS, stepS), stepS);
+  return { mission, stepS, model, requirementSpecs };
+}
+
+/**
+ * Datasheet rows to budgets: {@link prepareBudget}, then sample the nominal
+ * path, run the covariance analysis with per-source contributions (unless
+ * `contributions: false`, which runs the total alone, several times
+ * faster), then read requirements and checkpoints off the series.
+ * @throws InputError (a {@link SigmaLedgerError}) naming the bad field.
+ */
+export function computeBudget(input: BudgetInput, options: { contributions?: boolean } = {}): BudgetResult {
+  const { mission, stepS, model, requirementSpecs } = prepareBudget(input, options);
   const trajectory = buildNominalTrajectory(mission, stepS);
   const history = runCovariance(model, trajectory, { contributions: options.contributions });
   const series = buildBudgetSeries(model, trajectory, history);
   const requirements = requirementSpecs.map((r) => evaluateRequirement(r, series, model.streams));
   const checkpoints = checkpointBudgets(input.checkpoints, series, model.sources);
   const reportLevel = input.reportLevel === undefined ? '1sigma' : requireOneOf(input.reportLevel, LEVELS, 'reportLevel');
-  return { mission, model, trajectory, history, series, requirements, checkpoints, reportLevel };
+  const warnings = coarseLsbWarnings(input.sensors, mission);
+  return { mission, model, trajectory, history, series, requirements, checkpoints, reportLevel, warnings };
 }
 
 function resolveStep(input: BudgetInput, durationS: number): number {

@@ -1,3 +1,4 @@
+import { estimateWork, refuseExcessiveWork } from '../covariance/work-estimate';
 import { InputError } from '../errors';
 import type { BudgetInput, SourceInput } from '../inputs/budget-input';
 import { resolveMission } from '../mission/resolve-mission';
@@ -122,6 +123,7 @@ export function requirementsOf(input: BudgetInput): RequirementResult[] {
   const mission = resolveMission(input.mission);
   const stepS = positiveToSI(input.step, 'time', 'step');
   const model = buildErrorModel(input.sensors, mission, input.mission.initialSigmaNotes);
+  refuseExcessiveWork(estimateWork(model, input.sensors, mission.durationS, stepS, { contributions: false }), model, input.sensors);
   const reqs = resolveRequirements(input.requirements, mission.durationS);
   const traj = buildNominalTrajectory(mission, stepS);
   const series = buildBudgetSeries(model, traj, runCovariance(model, traj, { contributions: false }));

@@ -5,9 +5,10 @@
  */
 import { closeSync, openSync, writeSync } from 'node:fs';
 import { InputError, SigmaLedgerError } from '../errors';
+import { EXIT } from './exit-codes';
+import { escapeTerminalText } from './terminal-text';
 
-/** Exit codes: every requirement holds, some requirement fails, bad input. */
-export const EXIT = { pass: 0, fail: 1, badInput: 2 } as const;
+export { EXIT } from './exit-codes';
 
 /**
  * Runs a command body, turning a {@link SigmaLedgerError} into one line on
@@ -41,7 +42,7 @@ const PAUSE_EVERY_CHARS = 1 << 20;
  */
 export async function writePieces(pieces: Iterable<string>, io: Io, output?: string): Promise<void> {
   const fd = output === undefined ? undefined : openOutput(output);
-  const write = fd === undefined ? io.out : (text: string) => writeSync(fd, text);
+  const write = fd === undefined ? io.out : (text: string) => writeSync(fd, escapeTerminalText(text));
   try {
     let sincePause = 0;
     for (const piece of pieces) {

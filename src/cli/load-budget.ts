@@ -1,5 +1,5 @@
-import { readFileSync, statSync } from 'node:fs';
-import { MAX_TEXT_CHARS } from '../document';
+import { readFileSync } from 'node:fs';
+import { readBudgetText } from './read-budget-text';
 import { documentPathOf } from '../sheet';
 import { InputError, SigmaLedgerError } from '../errors';
 import type { BudgetInput } from '../inputs/budget-input';
@@ -23,21 +23,6 @@ export function loadBudget(file: string, options: AnalyseOptions = {}): LoadedBu
   const fileName = file === STDIN_OPERAND ? 'stdin' : file;
   const text = file === STDIN_OPERAND ? readStdin() : readBudgetText(file);
   return { ...analyseDocument(text, { ...options, name: fileName }), fileName };
-}
-
-function readBudgetText(fileName: string): string {
-  let size: number;
-  try {
-    const stat = statSync(fileName);
-    if (!stat.isFile()) throw new InputError(fileName, 'is not a file (a folder?); give the path of a budget .json file');
-    size = stat.size;
-  } catch (e) {
-    if (e instanceof InputError) throw e;
-    throw new InputError(fileName, `cannot be read (${(e as NodeJS.ErrnoException).code ?? 'error'}): check the path`);
-  }
-  // Bytes >= characters for UTF-8, so this refuses before reading anything huge.
-  if (size > 4 * MAX_TEXT_CHARS) throw new InputError(fileName, `is ${size} bytes; a budget file may have at most ${MAX_TEXT_CHARS} characters`);
-  return readFileSync(fileName, 'utf8');
 }
 
 function readStdin(): string {

@@ -11,10 +11,19 @@ import { UsageError, type CliCommand, type CliOption } from './cli-command';
 import { COMMANDS } from './command-table';
 import { commandHelp, mainHelp, optionList } from './command-help';
 import { packageVersion } from './package-version';
+import { reportInternalError, wantsDebug, DEBUG_OPTION } from './internal-error';
+import { escapeTerminalText } from './terminal-text';
 
-/** Runs the command line; returns the exit code. Messages for bad input go to `io.err`, never as a stack trace. */
-export async function main(argv: string[], io: Io = processIo()): Promise<number> {
-  const [first, ...rest] = argv;
+/**
+ * Runs the command line; returns the exit code ({@link EXIT}). Messages for
+ * bad input go to `io.err`, never as a stack trace; an internal error exits 3
+ * with a stack trace only under `--debug`. Every text printed is escaped for
+ * the terminal (see terminal-text.ts).
+ */
+export async function main(argv: string[], rawIo: Io = processIo()): Promise<number> {
+  const io: Io = { out: (t) => rawIo.out(escapeTerminalText(t)), err: (t) => rawIo.err(escapeTerminalText(t)) };
+  const debug = wantsDebug(argv);
+  const [first, ...rest] = argv.filter((a) => a !== DEBUG_OPTION);
   if (first === '--version' || first === '-V') {
     io.out(`sigma-ledger ${packageVersion()}\n`);
     return EXIT.pass;
@@ -48,7 +57,7 @@ export async function main(argv: string[], io: Io = processIo()): Promise<number
       io.err(`error: ${e.message}\n`);
       return EXIT.badInput;
     }
-    throw e;
+    return reportInternalError(e, debug, io.err);
   }
 }
 

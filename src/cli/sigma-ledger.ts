@@ -6,9 +6,15 @@
  * stack trace.
  */
 import { main } from './main';
+import { reportInternalError, wantsDebug } from './internal-error';
 
 process.stdout.on('error', (e: NodeJS.ErrnoException) => {
   if (e.code === 'EPIPE') process.exit(0);
   throw e;
 });
-process.exitCode = await main(process.argv.slice(2));
+try {
+  process.exitCode = await main(process.argv.slice(2));
+} catch (e) {
+  // A fault that escapes main is an internal error: exit 3, the stack trace only under --debug.
+  process.exitCode = reportInternalError(e, wantsDebug(process.argv), (t) => process.stderr.write(t));
+}

@@ -1,13 +1,17 @@
 import { InputError } from '../errors';
-import { toSI, type DimensionName } from '../units';
+import { formatSignificant, toSI, unitFor, type DimensionName } from '../units';
+import { implausibility } from './plausible-range';
 import type { Quantity } from './budget-input';
 
 /**
- * Reads a {@link Quantity} at `path`, checks its shape and converts it to SI.
+ * Reads a {@link Quantity} at `path`, checks its shape and converts it to SI
+ * (`positive`: a field whose reciprocal is used, with a smallest value too).
  * @throws InputError naming `path` when the quantity is missing, not a finite
- *   number, or its unit is unknown or of another dimension than `expected`.
+ *   number, or its unit is unknown or of another dimension than `expected`;
+ *   naming `path.value` when the value is infinite or vanishes in SI, or is
+ *   beyond what such a field can mean (see plausible-range.ts).
  */
-export function quantityToSI(q: Quantity | undefined, expected: DimensionName, path: string): number {
+export function quantityToSI(q: Quantity | undefined, expected: DimensionName, path: string, positive = false): number {
   if (q === undefined || q === null || typeof q !== 'object') {
     throw new InputError(path, 'is missing; expected { "value": number, "unit": text }');
   }
@@ -17,12 +21,18 @@ export function quantityToSI(q: Quantity | undefined, expected: DimensionName, p
   if (typeof q.unit !== 'string') {
     throw new InputError(`${path}.unit`, 'must be a unit text such as "deg/h" or "m"');
   }
-  return toSI(q.value, q.unit, expected, `${path}.unit`);
+  const si = toSI(q.value, q.unit, expected, `${path}.unit`);
+  const factor = unitFor(q.unit, expected, `${path}.unit`).factorToSI;
+  const problem = q.value !== 0 && si === 0
+    ? 'vanishes once converted to SI (it is below the smallest number a computer holds); write 0 if you mean none'
+    : implausibility(si, expected, (bound) => `${formatSignificant(bound / factor, 3)} ${q.unit}`, positive);
+  if (problem) throw new InputError(`${path}.value`, `${q.value} ${q.unit} ${problem}`);
+  return si;
 }
 
 /** Like {@link quantityToSI}, and the result must be > 0. */
 export function positiveToSI(q: Quantity | undefined, expected: DimensionName, path: string): number {
-  const si = quantityToSI(q, expected, path);
+  const si = quantityToSI(q, expected, path, true);
   if (!(si > 0)) throw new InputError(`${path}.value`, `must be greater than zero, got ${q!.value}`);
   return si;
 }

@@ -70,7 +70,7 @@ export interface JsonResult {
   requirements: RequirementEntry[];
   checkpoints: CheckpointEntry[];
   noise: NoiseTrace;
-  status: { healthy: boolean; issues: BudgetResult['history']['issues'] };
+  status: { healthy: boolean; issues: BudgetResult['history']['issues']; warnings: BudgetResult['warnings'] };
   /** Present when rows carry a filter design (`tuning`): see filter-design-json.ts. */
   filterDesign?: FilterDesignJson;
 }
@@ -111,7 +111,7 @@ export function buildJsonResult(result: BudgetResult, title: string, every = 1):
       }),
     })),
     noise: traceNoise(result.model),
-    status: { healthy: result.history.issues.length === 0, issues: result.history.issues },
+    status: { healthy: result.history.issues.length === 0, issues: result.history.issues, warnings: result.warnings },
   };
 }
 

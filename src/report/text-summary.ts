@@ -118,6 +118,7 @@ function traceLines(result: BudgetResult): string[] {
 
 function statusLines(result: BudgetResult): string[] {
   const issues = result.history.issues;
-  if (issues.length === 0) return ['NUMERICAL STATUS: covariance stayed finite, symmetric and positive semi-definite'];
-  return ['NUMERICAL STATUS: problems found', ...issues.map((i) => `  ${i.kind} at ${time(i.tS)}: ${i.detail}`)];
+  const warnings = result.warnings.map((w) => `  WARNING ${w.source}: ${w.message}`);
+  if (issues.length === 0) return ['NUMERICAL STATUS: covariance stayed finite, symmetric and positive semi-definite', ...warnings];
+  return ['NUMERICAL STATUS: problems found', ...issues.map((i) => `  ${i.kind} at ${time(i.tS)}: ${i.detail}`), ...warnings];
 }

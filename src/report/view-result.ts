@@ -7,6 +7,8 @@ import { analyseParsedDocument } from '../analyse-parsed-document';
 import { toSI } from '../units';
 import { requirementSeries } from './requirement-curves';
 import { keptSteps, type JsonResult } from './json-result';
+import { prepareBudget } from '../pipeline';
+import { dropRefusedItems } from '../sheet/drop-refused-items';
 import { CAUTION } from './caution';
 import { hasFilterDesign } from '../suboptimal/filter-rows';
 import { computeFilterDesign } from '../suboptimal/compute-filter-design';
@@ -63,7 +65,9 @@ export function computeView(doc: BudgetDocument, options: { contributions?: bool
 }
 
 /** The view of a document whose cells are already evaluated (see view-session.ts, which keeps the sheet between edits). */
-export function viewFromSheet(doc: BudgetDocument, sheet: SheetEvaluation, options: { contributions?: boolean } = {}): ViewResult {
+export function viewFromSheet(doc: BudgetDocument, evaluated: SheetEvaluation, options: { contributions?: boolean } = {}): ViewResult {
+  // Items the engine refuses (a unit of the wrong kind for the row) are left out and shown in place, like cell errors.
+  const sheet = dropRefusedItems(doc, evaluated, (input) => prepareBudget(input, options));
   const a = analyseParsedDocument(doc, [], { evaluate: () => sheet, contributions: options.contributions, report: { maxPoints: MAX_CHART_POINTS } });
   const base: ViewResult = {
     title: doc.title, caution: CAUTION, cellErrors: sheet.cellErrors, omitted: sheet.omitted,

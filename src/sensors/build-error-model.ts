@@ -5,6 +5,7 @@ import { emptySource, ModelBuilder } from '../covariance/model-builder';
 import type { ErrorModel } from '../covariance/error-model';
 import type { ResolvedMission } from '../mission/resolve-mission';
 import { SENSOR_KIND_NAMES, SENSOR_KINDS } from './registry';
+import { refuseUnreadFields } from './field-applicability';
 import type { Placement, PlacedSuite, SensorStates } from './sensor-kind';
 import { checkSuite } from './suite-rules';
 
@@ -38,6 +39,7 @@ export function buildErrorModel(sensors: SensorInput[], mission: ResolvedMission
   head.conversions.push({ field: 'value', text: mission.initialSigmaConversions.heading });
   b.sources.push(pos, head);
   const placed = list.map((sensor, i) => {
+    refuseUnreadFields(sensor, `sensors[${i}]`);
     const spec = SENSOR_KINDS[sensor.kind];
     for (const m of spec.measurements) b.measurementUnit(`${sensor.id}.${m.key}`, m.unitSI);
     return { kind: sensor.kind, placement: spec.place(b, sensor, { path: `sensors[${i}]`, missionDurationS: mission.durationS }) as Placement<SensorKind> };

@@ -26,6 +26,7 @@ import type { CellError } from './cell-error';
 import { listCells, type SheetCell } from './cell-list';
 import { isFailure, outcomeOf, type CellOutcome } from './cell-outcome';
 import { explainDependencies } from './dependencies';
+import { formulaProblem } from './formula-screen';
 import type { SheetEvaluation } from './sheet-evaluation';
 import { unitProblem } from './unit-checks';
 import { registerUnitFunctions } from './unit-functions';
@@ -40,17 +41,10 @@ function engineConfig(cellCount: number) {
   return { licenseKey: 'gpl-v3', smartRounding: false, maxRows: Math.max(DEFAULT_MAX_ROWS, cellCount) };
 }
 
-/** Spreadsheet functions whose result changes from run to run (HyperFormula's volatile functions). */
-const VOLATILE = /\b(RAND|RANDBETWEEN|NOW|TODAY)\s*\(/i;
-
 /** What a cell must hold, or undefined when it does. */
 function contentProblem(content: unknown): string | undefined {
   if (typeof content === 'number' && Number.isFinite(content)) return undefined;
-  if (typeof content === 'string' && content.startsWith('=') && content.length > 1) {
-    const volatile = VOLATILE.exec(content.replace(/"[^"]*"/g, '""'));
-    if (volatile) return `uses ${volatile[1].toUpperCase()}(), which gives another number on every run; a budget must be reproducible, so write a number`;
-    return undefined;
-  }
+  if (typeof content === 'string' && content.startsWith('=') && content.length > 1) return formulaProblem(content);
   return `must be a number or a formula starting with '=', got ${JSON.stringify(content) ?? String(content)}`;
 }
 

@@ -10,7 +10,7 @@ import { nameKey } from '../document/names';
 const NAME_TOKEN = /(?<![A-Za-z\u00C0-\u02AF0-9_.$])([A-Za-z\u00C0-\u02AF_][A-Za-z\u00C0-\u02AF0-9_.]*)(\s*\()?/g;
 
 /** A formula with its string literals ("..." with "" inside) blanked out. */
-function withoutStrings(formula: string): string {
+export function withoutStrings(formula: string): string {
   return formula.replace(/"(?:[^"]|"")*"?/g, (s) => ' '.repeat(s.length));
 }
 

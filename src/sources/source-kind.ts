@@ -62,8 +62,9 @@ export function readParameter(
   path: string,
   field: string,
   conversions: ConversionStep[],
+  positive = false,
 ): number {
-  const si = quantityToSI(q, expected, path);
+  const si = quantityToSI(q, expected, path, positive);
   conversions.push({ field, text: describeConversion(q!.value, q!.unit, expected).text });
   return si;
 }
@@ -79,7 +80,7 @@ export function readMagnitude(q: Quantity | undefined, expected: DimensionName, 
 export function readPositive(
   q: Quantity | undefined, expected: DimensionName, path: string, field: string, conversions: ConversionStep[],
 ): number {
-  const si = readParameter(q, expected, path, field, conversions);
+  const si = readParameter(q, expected, path, field, conversions, true);
   if (!(si > 0)) throw new InputError(`${path}.value`, `must be greater than zero, got ${q!.value}`);
   return si;
 }

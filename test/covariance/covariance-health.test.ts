@@ -1,6 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { checkCovariance } from '../../src/covariance/covariance-health';
 import { computeBudget } from '../../src/pipeline';
+import { resolveMission } from '../../src/mission/resolve-mission';
+import { buildNominalTrajectory } from '../../src/mission/nominal-trajectory';
+import { buildErrorModel } from '../../src/sensors/build-error-model';
+import { runCovariance } from '../../src/covariance/run-covariance';
+import { buildBudgetSeries } from '../../src/budget/budget-series';
 import { budget, gyro, q, straightMission, wheel } from '../fixtures/small-budgets';
 
 const check = (p: number[], n: number) => checkCovariance(Float64Array.from(p), 0, n, 12.5, new Float64Array(n * n));
@@ -28,9 +33,15 @@ describe('a run with a measurement of something already known exactly', () => {
   it('reports a singular innovation as a status instead of producing NaN', () => {
     // Parked, no initial uncertainty, and a GNSS fix with zero noise: H P Hᵀ + R = 0.
     const gnss = { id: 'gnss', kind: 'gnss-position' as const, rate: q(1, 'Hz'), sources: [{ id: 'white', kind: 'white-noise' as const, value: q(0, 'm') }] };
-    const r = computeBudget(budget(straightMission(3, 0), [gyro([]), wheel(), gnss], 1));
-    expect(r.history.issues.map((i) => i.kind)).toContain('singular-innovation');
-    expect(r.series.quantities.north!.total.every(Number.isFinite)).toBe(true);
+    const input = budget(straightMission(3, 0), [gyro([]), wheel(), gnss], 1);
+    // The pipeline refuses R = 0 up front (measurement-noise-check.ts); the run itself must still survive it.
+    expect(() => computeBudget(input)).toThrow(/sensors\[2\]\.sources\[0\]\.value: is 0/);
+    const mission = resolveMission(input.mission);
+    const model = buildErrorModel(input.sensors, mission);
+    const traj = buildNominalTrajectory(mission, 1);
+    const history = runCovariance(model, traj);
+    expect(history.issues.map((i) => i.kind)).toContain('singular-innovation');
+    expect(buildBudgetSeries(model, traj, history).quantities.north!.total.every(Number.isFinite)).toBe(true);
   });
 });
 

@@ -4,6 +4,7 @@ import { computeBudget } from '../../src/pipeline';
 import type { BudgetInput } from '../../src/inputs/budget-input';
 import { budgetArb, makeBudget } from '../fixtures/random-budgets';
 
+
 // docs/planar-model.md §9: for an optimal filter the covariance never decreases when a noise magnitude grows
 // (the Riccati map is monotone in P0, Q and R; Anderson & Moore, Optimal Filtering, 1979, from memory),
 // to round-off: 1e-12 relative is allowed there.

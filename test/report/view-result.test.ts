@@ -27,12 +27,21 @@ describe('the page view of a budget', () => {
     expect(view.omitted.length).toBeGreaterThan(0);
   });
 
-  it('comes back blocked, with the document path, for an input the engine refuses', () => {
+  it('leaves out an item the engine refuses, with its error at the document path, and computes the rest', () => {
     const doc = load('budgets/orchard-rover.json');
     doc.sensors[2].outages![0].end = { value: 9999, unit: 's' };
     const view = computeView(doc);
+    expect(view.result).toBeDefined();
+    const error = view.cellErrors.find((e) => e.location.path === 'sensors[2].outages[0]');
+    expect(error?.message).toMatch(/within the mission/);
+    expect(view.omitted.map((o) => o.path)).toContain('sensors[2].outages[0]');
+  });
+
+  it('comes back blocked, with the document path, for an input the engine refuses outside any item', () => {
+    const doc = load('budgets/orchard-rover.json');
+    doc.settings.step = { value: 1e-4, unit: 's' };
+    const view = computeView(doc);
     expect(view.result).toBeUndefined();
-    expect(view.blocked!.path).toBe('sensors[2].outages[0]');
-    expect(view.blocked!.message).toMatch(/within the mission/);
+    expect(view.blocked!.path).toBe('settings.step.value');
   });
 });

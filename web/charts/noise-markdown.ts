@@ -1,5 +1,6 @@
 import type { NoiseTrace, TracedEntry } from '../../src';
 import { formatSignificant, withUnit } from '../../src';
+import { markdownText, neutraliseCell } from '../../src/report/spreadsheet-safe';
 
 /** A ledger value: four significant digits (the unit goes beside it). */
 export const ledgerNumber = (x: number) => formatSignificant(x, 4);
@@ -29,7 +30,8 @@ export function valueAndRoot(valueSI: number, unitSI: string): [string, string] 
   return [withUnit(ledgerNumber(valueSI), unitSI), root && valueSI >= 0 ? withUnit(ledgerNumber(Math.sqrt(valueSI)), root) : ''];
 }
 
-const cell = (text: string) => text.replace(/\|/g, '\\|').replace(/\s*\n\s*/g, ' ');
+/** A table cell: safe to paste into a spreadsheet and rendered as the same text. */
+const cell = (text: string) => markdownText(neutraliseCell(text));
 const row = (cells: string[]) => `| ${cells.map(cell).join(' | ')} |`;
 
 function entryRows(e: TracedEntry): string[] {
@@ -45,7 +47,7 @@ function entryRows(e: TracedEntry): string[] {
  * source's piece, derivation and unit conversions, and the caution.
  */
 export function noiseLedgerMarkdown(noise: NoiseTrace, title: string, caution: string): string {
-  const lines = [`## R, Q and P0 used: ${cell(title)}`, ''];
+  const lines = [`## R, Q and P0 used: ${markdownText(title)}`, ''];
   for (const [key, symbol, meaning] of LEDGER_BLOCKS) {
     lines.push(`### ${symbol}: ${meaning}`, '');
     if (noise[key].length === 0) {
@@ -55,6 +57,6 @@ export function noiseLedgerMarkdown(noise: NoiseTrace, title: string, caution: s
     lines.push(row(['Entry', 'Source', 'Value', '√ value', 'Derivation', 'Unit conversions']), '| --- | --- | --- | --- | --- | --- |');
     lines.push(...noise[key].flatMap(entryRows), '');
   }
-  lines.push(`> Caution: ${cell(caution)}`, '');
+  lines.push(`> Caution: ${markdownText(caution)}`, '');
   return lines.join('\n');
 }

@@ -62,6 +62,7 @@ export class SlApp extends LitElement {
     this.addEventListener('dragover', (e) => e.preventDefault());
     this.addEventListener('drop', (e) => this.dropped(e));
     window.addEventListener('keydown', this.keydown);
+    this.autosave.addEventListener('status', () => this.requestUpdate());
     void this.restore();
   }
 
@@ -89,6 +90,9 @@ export class SlApp extends LitElement {
         <div class="status" data-state=${c.status} role="status" aria-live="polite">${this.statusText()}</div>
       </header>
       <div class="caution" role="note"><strong>Caution:</strong> ${CAUTION}</div>
+      ${this.autosave.failure ? html`<div class="banner save-failed" role="alert"><strong>Your edits are not being saved in this browser:</strong>
+        ${this.autosave.failure}. A reload would lose them; keep a copy of the current budget:
+        <button @click=${this.save}>Download the current budget</button></div>` : nothing}
       ${this.message ? html`<div class="banner" role="alert">${this.message}<button @click=${() => (this.message = undefined)}>Dismiss</button></div>` : nothing}
       <main>
         <sl-workbench .store=${this.store} .view=${c.view}></sl-workbench>
@@ -110,6 +114,7 @@ export class SlApp extends LitElement {
   private async restore(): Promise<void> {
     const saved = await this.autosave.load();
     if (saved) this.store.restore(saved);
+    if (this.autosave.restoreNote) this.message = this.autosave.restoreNote;
     this.autosave.attach(this.store);
     this.ready = true;
     this.compute.request(this.store.document, true);

@@ -5,7 +5,7 @@ import type { ViewResult } from '../../src';
 import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
 import { idProblem, uniqueId } from '../../src';
-import { blockedWithin } from '../grid/view-lookup';
+import { itemProblem } from '../grid/view-lookup';
 import type { CellCommitDetail } from './sl-cell';
 import './sl-cell';
 import './sl-quantity';
@@ -39,7 +39,7 @@ export class SlCheckpointList extends LitElement {
   }
 
   private renderCheckpoint(c: CheckpointEntry, k: number) {
-    const blocked = blockedWithin(this.view, `checkpoints[${k}]`);
+    const blocked = itemProblem(this.view, `checkpoints[${k}]`);
     return html`<tr>
       <td><sl-cell text .content=${c.id} label=${`Id of checkpoint ${c.id}`} @sl-commit=${(e: CustomEvent<CellCommitDetail>) => this.rename(k, e)}></sl-cell></td>
       <td><sl-quantity .store=${this.store} .doc=${this.doc} .view=${this.view} path=${`checkpoints[${k}].time`} label=${`${c.id} time`} .dimensions=${['time']}></sl-quantity>

@@ -105,7 +105,7 @@ export class SlFindings extends LitElement {
         ${view.blocked.path ? html`<div>at <code>${view.blocked.path}</code></div>` : nothing}</div>`;
     }
     if (!view.result) return html`<p class="empty">No results.</p>`;
-    return html`${this.partialNote(view)}<div class="results" aria-busy=${String(this.stale)}>${FINDINGS_TABS.map(([key]) => this.panel(key, view))}</div>`;
+    return html`${this.partialNote(view)}${this.warningsNote(view)}<div class="results" aria-busy=${String(this.stale)}>${FINDINGS_TABS.map(([key]) => this.panel(key, view))}</div>`;
   }
 
   private partialNote(view: ViewResult) {
@@ -114,6 +114,14 @@ export class SlFindings extends LitElement {
     const cells = `${errors} ${errors === 1 ? 'cell has an error' : 'cells have errors'}`;
     return html`<div class="note partial" role="alert"><strong>Partial:</strong> ${cells}${left.length ? `; these items are left out: ${left.join(', ')}` : ''}.
       The verdicts are provisional until the cells are fixed.</div>`;
+  }
+
+  /** Rows the analysis ran with but models optimistically (a coarse LSB), from the result's status. */
+  private warningsNote(view: ViewResult) {
+    const warnings = view.result?.status.warnings ?? [];
+    if (warnings.length === 0) return nothing;
+    return html`<div class="note partial" role="status"><strong>Modelling warning:</strong>
+      ${warnings.map((w) => html`<div><code>${w.source}</code>: ${w.message}</div>`)}</div>`;
   }
 
   private panel(key: FindingsTab, view: ViewResult) {

@@ -5,7 +5,7 @@ import type { ViewResult } from '../../src';
 import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
 import { idProblem, uniqueId } from '../../src';
-import { blockedWithin, isOmitted } from '../grid/view-lookup';
+import { isOmitted, itemProblem } from '../grid/view-lookup';
 import type { CellCommitDetail } from './sl-cell';
 import './sl-cell';
 import './sl-quantity';
@@ -45,7 +45,7 @@ export class SlLandmarkTable extends LitElement {
   private renderMark(sensorId: string, m: LandmarkEntry, k: number) {
     const path = `sensors[${this.sensorIndex}].landmarks[${k}]`;
     const name = `${sensorId} landmark ${m.id}`;
-    const blocked = blockedWithin(this.view, path);
+    const blocked = itemProblem(this.view, path);
     const q = (field: 'north' | 'east') => html`<sl-quantity .store=${this.store} .doc=${this.doc} .view=${this.view} path=${`${path}.${field}`}
       label=${`${name} ${field}`} .dimensions=${['length']}></sl-quantity>`;
     return html`

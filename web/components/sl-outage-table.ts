@@ -5,7 +5,7 @@ import type { ViewResult } from '../../src';
 import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
 import { idProblem, uniqueId } from '../../src';
-import { blockedWithin, isOmitted } from '../grid/view-lookup';
+import { isOmitted, itemProblem } from '../grid/view-lookup';
 import type { CellCommitDetail } from './sl-cell';
 import './sl-cell';
 import './sl-quantity';
@@ -46,7 +46,7 @@ export class SlOutageTable extends LitElement {
   private renderOutage(sensorId: string, o: OutageEntry, k: number) {
     const path = `sensors[${this.sensorIndex}].outages[${k}]`;
     const name = `${sensorId} outage ${o.id ?? k + 1}`;
-    const blocked = blockedWithin(this.view, path);
+    const blocked = itemProblem(this.view, path);
     const q = (field: 'start' | 'end') => html`<sl-quantity .store=${this.store} .doc=${this.doc} .view=${this.view} path=${`${path}.${field}`}
       label=${`${name} ${field}`} .dimensions=${['time']}></sl-quantity>`;
     return html`

@@ -8,7 +8,7 @@ import { DIMENSIONS, unitDimension } from '../../src';
 import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
 import { idProblem, uniqueId } from '../../src';
-import { blockedWithin, isOmitted } from '../grid/view-lookup';
+import { isOmitted, itemProblem } from '../grid/view-lookup';
 import type { CellCommitDetail } from './sl-cell';
 import './sl-cell';
 import './sl-quantity';
@@ -56,7 +56,7 @@ export class SlRequirementTable extends LitElement {
 
   private renderRequirement(r: RequirementEntry, k: number) {
     const path = `requirements[${k}]`;
-    const blocked = blockedWithin(this.view, path);
+    const blocked = itemProblem(this.view, path);
     const select = (what: 'quantity' | 'level', options: string[], label: (o: string) => string) => html`
       <select aria-label=${`${r.id} ${what}`} @change=${(e: Event) => this.pick(k, what, (e.target as HTMLSelectElement).value)}>
         ${options.map((o) => html`<option .value=${o} ?selected=${o === r[what]}>${label(o)}</option>`)}</select>`;

@@ -7,7 +7,7 @@ import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
 import { idProblem, uniqueId } from '../../src';
 import { moveItem } from '../grid/row-edits';
-import { blockedWithin, isOmitted } from '../grid/view-lookup';
+import { isOmitted, itemProblem } from '../grid/view-lookup';
 import type { CellCommitDetail } from './sl-cell';
 import './sl-cell';
 import './sl-quantity';
@@ -50,7 +50,7 @@ export class SlSegmentTable extends LitElement {
   private renderSegment(s: SegmentEntry, k: number, count: number) {
     const path = `mission.segments[${k}]`;
     const name = `segment ${s.id ?? k + 1}`;
-    const blocked = blockedWithin(this.view, path);
+    const blocked = itemProblem(this.view, path);
     return html`
       <tr>
         <td><sl-cell text optional .content=${s.id} label=${`Id of ${name}`} placeholder=${String(k + 1)} @sl-commit=${(e: CustomEvent<CellCommitDetail>) => this.rename(k, e)}></sl-cell></td>

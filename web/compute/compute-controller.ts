@@ -10,8 +10,18 @@ export type ComputeStatus = 'idle' | 'pending' | 'complete' | 'error';
 export const DEBOUNCE_MS = 40;
 
 /**
+ * A computation running longer than this when the document changes is
+ * abandoned: the worker is terminated and a fresh one takes the new
+ * document (a restart costs about a workbook build, so a short run is left
+ * to finish instead).
+ */
+export const CANCEL_AFTER_MS = 250;
+
+/**
  * The one path from the page to the engine: debounces edits, keeps at most
- * one request in the worker, and exposes the latest view with its status.
+ * one request in the worker (abandoning a long one when the document
+ * changes, so a budget that computes for minutes never holds the page), and
+ * exposes the latest view with its status.
  * `stale` is true while the shown view is older than the document.
  * Fires nothing itself; it asks its host to update.
  */
@@ -28,6 +38,9 @@ export class ComputeController implements ReactiveController {
   private worker?: Worker;
   private seq = 0;
   private inFlight?: number;
+  private inFlightSinceMs = 0;
+  /** Workers terminated because the document changed under a long computation. */
+  restarts = 0;
   private queued?: BudgetDocument;
   private timer?: ReturnType<typeof setTimeout>;
   private waiting = false;
@@ -37,8 +50,23 @@ export class ComputeController implements ReactiveController {
   }
 
   hostConnected(): void {
-    this.worker = this.makeWorker();
-    this.worker.onmessage = (e: MessageEvent<ComputeResponse>) => this.received(e.data);
+    this.startWorker();
+  }
+
+  private startWorker(): void {
+    const worker = this.makeWorker();
+    worker.onmessage = (e: MessageEvent<ComputeResponse>) => {
+      if (worker === this.worker) this.received(e.data);
+    };
+    this.worker = worker;
+  }
+
+  /** Abandons the running computation: terminates its worker and starts a fresh one. */
+  private cancelRunning(): void {
+    this.worker?.terminate();
+    this.inFlight = undefined;
+    this.restarts++;
+    this.startWorker();
   }
 
   hostDisconnected(): void {
@@ -49,6 +77,7 @@ export class ComputeController implements ReactiveController {
   /** Schedules a recompute of `doc` (debounced); `immediate` skips the wait. */
   request(doc: BudgetDocument, immediate = false): void {
     this.queued = doc;
+    if (this.inFlight !== undefined && this.worker && performance.now() - this.inFlightSinceMs > CANCEL_AFTER_MS) this.cancelRunning();
     this.stale = this.view !== undefined;
     this.status = 'pending';
     clearTimeout(this.timer);
@@ -65,6 +94,7 @@ export class ComputeController implements ReactiveController {
     const request: ComputeRequest = { seq: ++this.seq, document: this.queued };
     this.queued = undefined;
     this.inFlight = request.seq;
+    this.inFlightSinceMs = performance.now();
     this.worker.postMessage(request);
   }
 

@@ -13,6 +13,7 @@ import { cellText, readCellText } from '../../src';
 import { idProblem, isTaken, uniqueId } from '../../src';
 import { changeRowKind, fillRequired, newRow } from './row-edits';
 import { rowDimensions } from '../../src';
+import { neutraliseCell, restoreCell } from '../../src/report/spreadsheet-safe';
 
 /** The pasted columns, in order, as the hint in the grid names them. */
 export const PASTE_COLUMNS = ['id', 'kind', 'value', 'unit', 'correlation time', 'correlation time unit', 'provenance'] as const;
@@ -47,7 +48,7 @@ function readKind(text: string, sensorKind: SensorKind): SourceKind | string {
 
 /** Reads one line's fields; a string is the reason it cannot be used. */
 function readLine(fields: string[], sensorKind: SensorKind): PastedRow | string {
-  const [id, kindText, valueText, unitText, tauText, tauUnitText, provenance, ...extra] = fields.map((f) => f.trim());
+  const [id, kindText, valueText, unitText, tauText, tauUnitText, provenance, ...extra] = fields.map((f) => restoreCell(f.trim()));
   if (extra.some((f) => f !== '')) return `has ${fields.length} columns; expected at most ${PASTE_COLUMNS.length} (${PASTE_COLUMNS.join(', ')})`;
   if (!kindText) return `needs at least id, kind, value and unit, separated by tabs`;
   const kind = readKind(kindText, sensorKind);
@@ -123,9 +124,13 @@ export function applyPastedRows(sensor: SensorEntry, rows: PastedRow[]): { added
 /** A field made safe for one tab-separated cell. */
 const field = (text: string) => text.replace(/[\t\r\n]+/g, ' ');
 
-/** Rows as tab-separated lines in the paste order, for the clipboard. Throws nothing. */
+/**
+ * Rows as tab-separated lines in the paste order, for the clipboard; a cell
+ * a spreadsheet would evaluate (a formula, a provenance starting with = or
+ * +) gets a leading ', which pasting back here removes. Throws nothing.
+ */
 export function rowsAsText(rows: SourceRow[]): string {
   return rows
-    .map((r) => [r.id, r.kind, cellText(r.value), r.unit, cellText(r.correlationTime?.value), r.correlationTime?.unit ?? '', r.provenance].map((f) => field(f ?? '')).join('\t'))
+    .map((r) => [r.id, r.kind, cellText(r.value), r.unit, cellText(r.correlationTime?.value), r.correlationTime?.unit ?? '', r.provenance].map((f) => neutraliseCell(field(f ?? ''))).join('\t'))
     .join('\n');
 }

@@ -36,3 +36,15 @@ export function errorsWithin(view: ViewResult | undefined, prefix: string): Cell
 export function isOmitted(view: ViewResult | undefined, path: string): boolean {
   return view?.omitted.some((o) => o.path === path) ?? false;
 }
+
+/**
+ * What to show beside an item (an outage, a landmark, a segment, a
+ * requirement, a checkpoint): the blocking problem within it, or the error
+ * of the item as a whole when the analysis refused and left it out (an
+ * outage outside the mission, a window that holds no step). Errors of its
+ * value cells are shown by the cells themselves. Throws nothing.
+ */
+export function itemProblem(view: ViewResult | undefined, prefix: string): string | undefined {
+  return blockedWithin(view, prefix)
+    ?? view?.cellErrors.find((e) => isWithin(e.location.path, prefix) && !/\.(value|unit)$/.test(e.location.path))?.message;
+}

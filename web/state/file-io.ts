@@ -1,11 +1,22 @@
-import { parseBudgetDocument, serializeBudgetDocument, type BudgetDocument } from '../../src';
+import { MAX_TEXT_CHARS, parseBudgetDocument, serializeBudgetDocument, type BudgetDocument } from '../../src';
+import { BudgetFileError } from '../../src/document/budget-file-error';
+import { firstInvalidUtf8Byte, invalidUtf8Message } from '../../src/document/invalid-utf8';
 
 /**
- * Reads a budget file the user picked or dropped.
+ * Reads a budget file the user picked or dropped: its size is checked
+ * before anything is read, and bytes that are not UTF-8 are refused with
+ * the offset of the first one (never replaced silently).
  * @throws the document module's BudgetFileError (a SigmaLedgerError) naming the file and field.
  */
 export async function readBudgetFile(file: File): Promise<{ document: BudgetDocument; notes: string[] }> {
-  return parseBudgetDocument(await file.text(), file.name);
+  if (file.size > 4 * MAX_TEXT_CHARS) {
+    throw new BudgetFileError(file.name, '', `is too large: ${file.size} bytes; a budget file may have at most ${MAX_TEXT_CHARS} characters`);
+  }
+  const bytes = new Uint8Array(await file.arrayBuffer());
+  const text = new TextDecoder('utf-8', { ignoreBOM: true }).decode(bytes);
+  const bad = firstInvalidUtf8Byte(bytes, text);
+  if (bad >= 0) throw new BudgetFileError(file.name, '', invalidUtf8Message(bytes, bad));
+  return parseBudgetDocument(text, file.name);
 }
 
 /** Offers the document for download as the same JSON the command line reads. */

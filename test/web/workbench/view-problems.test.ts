@@ -8,12 +8,23 @@ const outageOutsideMission = (d: import('../../../src/document').BudgetDocument)
 };
 
 describe('problems the view reports', () => {
-  it('a blocking problem is shown at the top of the workbench and next to its item', async () => {
-    const { el } = await workbench(3, outageOutsideMission);
-    expect(el.view!.blocked!.path).to.equal('sensors[2].outages[0]');
+  it('a blocking problem is shown at the top of the workbench and leads to its sensor', async () => {
+    const { el } = await workbench(3, (d) => (d.sensors[2].rate = { value: 1e9, unit: 'Hz' }));
+    expect(el.view!.blocked!.path).to.equal('sensors[2].rate.value');
     const top = el.shadowRoot!.querySelector('.alerts .blocked')!;
-    expect(top.textContent).to.contain('must lie within the mission');
+    expect(top.textContent).to.contain('1000000000 Hz is more than 100000 Hz');
     (top.querySelector('button') as HTMLButtonElement).click();
+    await settle(el);
+    expect((deepQuery(el, 'sl-suite-editor') as SlSuiteEditor).selected).to.equal(2);
+  });
+
+  it('an item the analysis refuses is left out, the rest computes, and its reason is shown next to it', async () => {
+    const { el } = await workbench(3, outageOutsideMission);
+    expect(el.view!.blocked).to.equal(undefined);
+    expect(el.view!.result).to.not.equal(undefined);
+    const list = el.shadowRoot!.querySelector('.alerts .omitted')!;
+    expect(list.textContent).to.contain('outage');
+    (list.querySelector('button') as HTMLButtonElement).click();
     await settle(el);
     expect((deepQuery(el, 'sl-suite-editor') as SlSuiteEditor).selected).to.equal(2);
     const row = deepQuery(el, 'sl-outage-table').shadowRoot!.querySelector('.blocked')!;
