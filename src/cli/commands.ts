@@ -54,12 +54,12 @@ export function runCommand(file: string, opts: RunOptions, io: Io): number {
   const started = Date.now();
   const result = withDocumentPaths(loaded, (input) => {
     announceLongRun(input, io);
-    return computeBudget(input);
+    return computeBudget(input, { every: opts.every });
   });
   if (Date.now() - started > 2000) io.err(`computed ${result.trajectory.tS.length} steps in ${((Date.now() - started) / 1000).toFixed(1)} s\n`);
   const title = loaded.document.title + (problems ? ' (PARTIAL: cells with errors were left out)' : '');
   const text = opts.json
-    ? JSON.stringify(buildJsonResult(result, title, opts.every)) + '\n'
+    ? JSON.stringify(buildJsonResult(result, title)) + '\n'
     : formatSummary(result, { title, fileName: file });
   if (opts.output) writeOutput(opts.output, text);
   else io.out(text);

@@ -12,7 +12,8 @@ usage:
   sigma-ledger run FILE [--json] [--every N] [--output OUT]
       the budget's summary: requirement verdicts, margins, time to exceed per
       outage, budgets at checkpoints, the R, Q and P0 used; --json prints the
-      full result (series thinned to every N-th step with --every)
+      full result; --every N keeps the series at every N-th step (plus checkpoints
+      and the last) to bound memory; verdicts are still evaluated at every step
   sigma-ledger size FILE --requirement ID --vary SENSOR.ROW [--tolerance REL] [--json]
       the largest value of one row's magnitude that still meets a requirement
   sigma-ledger check FILE

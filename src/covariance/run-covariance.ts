@@ -6,7 +6,8 @@ import {
 import { checkCovariance, type CovarianceIssue } from './covariance-health';
 import type { StepDiscretisation } from './discretise-step';
 import { DiscretisationCache } from './discretisation-cache';
-import { scheduleMeasurements, type ScheduledMeasurement } from './measurement-schedule';
+import { MeasurementSchedule, type ScheduledMeasurement } from './measurement-schedule';
+import { recordEveryStep, recordsEveryStep, type RecordPlan } from './record-plan';
 import { initialiseStorage, planSourceStorage, sourceEntry, sourceMatrix, type SourceStorage } from './source-storage';
 
 /**
@@ -24,7 +25,12 @@ export interface RecordedEntries {
 
 /** What the covariance run produces. */
 export interface CovarianceHistory {
+  /** Recorded steps (the rows of `entries`); equals the run's steps unless a record plan thins them. */
   steps: number;
+  /** The trajectory step index of each recorded row. */
+  recordedSteps: Int32Array;
+  /** The total's entries (row 0 only) at every step of the run, for exact requirement verdicts. */
+  totalEntries: RecordedEntries;
   /** Sources with recorded contributions (0 when run without them). */
   sourceCount: number;
   entries: RecordedEntries;
@@ -45,6 +51,8 @@ export interface CovarianceHistory {
 export interface RunOptions {
   /** Carry every source's P_s (default true); false runs the total only (what sizing needs). */
   contributions?: boolean;
+  /** Which steps keep their entries (default every step); see record-plan.ts. */
+  record?: RecordPlan;
 }
 
 /** Steps between full checks of the total covariance. */
@@ -72,8 +80,10 @@ export function runCovariance(model: ErrorModel, traj: NominalTrajectory, option
   const contributions = options.contributions !== false;
   const n = model.states.length;
   const S = contributions ? model.sources.length : 0;
-  const steps = traj.tS.length;
-  const schedule = scheduleMeasurements(model, traj);
+  const runSteps = traj.tS.length;
+  const recordPlan = options.record ?? recordEveryStep(runSteps);
+  const steps = recordPlan.recordedSteps.length;
+  const schedule = new MeasurementSchedule(model, traj);
   const plan = planSourceStorage(model, contributions);
   const st: RunState = {
     n, plan, mats: new Float64Array(plan.denseCount * n * n), vecs: new Float64Array(Math.max(1, plan.vectors) * n),
@@ -81,28 +91,33 @@ export function runCovariance(model: ErrorModel, traj: NominalTrajectory, option
   };
   initialiseStorage(model, plan, st.mats, st.vecs, contributions);
   const rec = allocateEntries((S + 1) * steps);
+  const totals = recordsEveryStep(recordPlan) ? totalView(rec, steps) : allocateEntries(runSteps);
   const calibrationStates = model.states.flatMap((s, i) => (s.calibration ? [i] : []));
   const calibrationSigma = calibrationStates.map(() => new Float64Array(steps));
   const issues: CovarianceIssue[] = [];
   const counts: Record<string, number> = {};
   const cache = new DiscretisationCache(model, traj);
 
-  for (let k = 0; k < steps; k++) {
+  for (let k = 0; k < runSteps; k++) {
     if (k > 0) for (const d of cache.forStep(k)) propagateAll(st, d);
-    for (const m of schedule[k]) {
+    for (const m of schedule.at(k)) {
       if (updateAll(st, m)) counts[m.sensorId] = (counts[m.sensorId] ?? 0) + 1;
       else noteIssue(issues, { kind: 'singular-innovation', tS: traj.tS[k], detail: `${m.key}: innovation variance is not positive` });
     }
-    record(model, st, S, k, steps, rec);
-    calibrationStates.forEach((i, c) => (calibrationSigma[c][k] = Math.sqrt(Math.max(0, st.mats[i * n + i]))));
+    const row = recordPlan.rowOfStep[k];
+    if (row >= 0) {
+      record(model, st, S, row, steps, rec);
+      calibrationStates.forEach((i, c) => (calibrationSigma[c][row] = Math.sqrt(Math.max(0, st.mats[i * n + i]))));
+    }
+    if (totals !== rec) record(model, st, 0, k, runSteps, totals);
     // The full check (an LDLᵀ) every tenth step and at the end: a problem is reported within a second of mission time.
-    if (k % HEALTH_CHECK_EVERY === 0 || k === steps - 1) {
+    if (k % HEALTH_CHECK_EVERY === 0 || k === runSteps - 1) {
       const issue = checkCovariance(st.mats, 0, n, traj.tS[k], st.scratch);
       if (issue) noteIssue(issues, issue);
     }
   }
   return {
-    steps, sourceCount: S, entries: rec, calibrationStates, calibrationSigma,
+    steps, recordedSteps: recordPlan.recordedSteps, totalEntries: totals, sourceCount: S, entries: rec, calibrationStates, calibrationSigma,
     finalCovariance: st.mats.slice(0, n * n),
     finalSourceCovariances: Array.from({ length: S }, (_, s) => sourceMatrix(plan, st.mats, st.vecs, n, s)),
     measurementCounts: counts, issues,
@@ -147,6 +162,14 @@ function allocateEntries(len: number): RecordedEntries {
   return {
     alongAlong: new Float64Array(len), crossCross: new Float64Array(len), alongCross: new Float64Array(len),
     headingHeading: new Float64Array(len), speedScale: new Float64Array(len),
+  };
+}
+
+/** The total's row of entries recorded at every step, as views (no copy). */
+function totalView(rec: RecordedEntries, steps: number): RecordedEntries {
+  return {
+    alongAlong: rec.alongAlong.subarray(0, steps), crossCross: rec.crossCross.subarray(0, steps), alongCross: rec.alongCross.subarray(0, steps),
+    headingHeading: rec.headingHeading.subarray(0, steps), speedScale: rec.speedScale.subarray(0, steps),
   };
 }
 

@@ -7,7 +7,7 @@ import { computeBudget } from '../pipeline';
 import { SigmaLedgerError } from '../errors';
 import { levelSeries, limitDimension } from '../budget/levels';
 import { fromSI, toSI } from '../units';
-import { buildJsonResult, keptSteps, type JsonResult } from './json-result';
+import { buildJsonResult, type JsonResult } from './json-result';
 import { CAUTION } from './caution';
 
 /** Most points a chart series gets; longer missions are thinned to every n-th step. */
@@ -69,15 +69,15 @@ export function viewFromSheet(doc: BudgetDocument, sheet: SheetEvaluation, optio
   };
   if (!sheet.input) return { ...base, blocked: { message: sheet.blocked ?? 'nothing to compute' } };
   try {
-    const r = computeBudget(sheet.input, options);
-    const every = Math.ceil(r.trajectory.tS.length / MAX_CHART_POINTS);
-    const steps = keptSteps(r.trajectory.tS.length, every);
+    // The engine keeps only the steps a chart draws; verdicts and checkpoints are still exact.
+    const r = computeBudget(sheet.input, { ...options, maxRecordedSteps: MAX_CHART_POINTS });
+    const steps = Array.from(r.history.recordedSteps);
     const keep = (a: ArrayLike<number>) => steps.map((k) => a[k]);
     const curves = r.requirements.map((req) => {
       const spec = sheet.input!.requirements!.find((x) => x.id === req.id)!;
       const series = levelSeries(r.series, spec.quantity, spec.level, req.id);
       const dim = limitDimension(spec.quantity);
-      return { id: req.id, quantity: spec.quantity, level: spec.level, limit: req.limit.value, unit: req.limit.unit, values: keep(series).map((v) => fromSI(v, req.limit.unit, dim, req.id)) };
+      return { id: req.id, quantity: spec.quantity, level: spec.level, limit: req.limit.value, unit: req.limit.unit, values: Array.from(series, (v) => fromSI(v, req.limit.unit, dim, req.id)) };
     });
     const plan: PlanView = {
       north: keep(r.trajectory.northM), east: keep(r.trajectory.eastM), t: keep(r.trajectory.tS),
@@ -87,7 +87,7 @@ export function viewFromSheet(doc: BudgetDocument, sheet: SheetEvaluation, optio
       outages: r.model.streams.flatMap((s) => s.outages.map((o) => ({ sensorId: s.sensorId, id: o.id, startS: o.startS, endS: o.endS }))),
     };
     const pending = options.contributions === false;
-    return { ...base, result: buildJsonResult(r, doc.title, every), curves, plan, ...(pending && { contributionsPending: true }) };
+    return { ...base, result: buildJsonResult(r, doc.title), curves, plan, ...(pending && { contributionsPending: true }) };
   } catch (e) {
     if (!(e instanceof SigmaLedgerError)) throw e;
     const path = e.path ? documentPathOf(e.path, sheet.indexMap) : undefined;
