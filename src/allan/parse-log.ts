@@ -54,13 +54,17 @@ export class SensorLogReader {
   private readonly columns: GrowableFloat64Array[];
   private readonly lines = new RowLines();
   private rows = 0;
+  /** The time column asked for or found among the candidates. */
+  private timeColumn: string | undefined;
 
   /** @throws InputError when the time unit is not a time, or no value column is asked for. */
   constructor(private readonly options: LogParseOptions) {
     this.source = options.sourceName ?? 'log';
     this.timeFactorToSI = unitFor(options.timeUnit ?? 's', 'time', 'timeUnit').factorToSI;
     if (options.valueColumns.length === 0) throw new InputError('valueColumns', 'name at least one value column');
-    const wanted = options.valueColumns.length + (options.timeColumn === undefined ? 0 : 1);
+    this.timeColumn = options.timeColumn;
+    const timed = options.timeColumn !== undefined || (options.timeColumnCandidates?.length ?? 0) > 0;
+    const wanted = options.valueColumns.length + (timed ? 1 : 0);
     this.columns = Array.from({ length: wanted }, () => new GrowableFloat64Array(1 << 16));
   }
 
@@ -140,11 +144,23 @@ export class SensorLogReader {
     const where = `${this.source} line ${this.headerLine} (header)`;
     const delimiter = this.options.delimiter ?? detectDelimiter(headerText);
     this.columnsFound = readHeader(headerText, delimiter, where);
-    const names = [...this.options.valueColumns, ...(this.options.timeColumn === undefined ? [] : [this.options.timeColumn])];
+    if (this.timeColumn === undefined && this.options.timeColumnCandidates?.length) this.timeColumn = this.findTimeColumn(where);
+    const names = [...this.options.valueColumns, ...(this.timeColumn === undefined ? [] : [this.timeColumn])];
     const option = (name: string): string =>
-      this.options.optionNames?.[name] ?? (name === this.options.timeColumn ? 'timeColumn' : 'valueColumns');
+      this.options.optionNames?.[name] ?? (name === this.timeColumn ? this.options.optionNames?.timeColumn ?? 'timeColumn' : 'valueColumns');
     const indices = names.map((n) => findColumn(this.columnsFound, n, where, option(n)));
     this.layout = { delimiter, names: indices.map((i) => this.columnsFound[i]), indices };
+  }
+
+  /** The first of the candidate names in the header (ignoring case). */
+  private findTimeColumn(where: string): string {
+    const candidates = this.options.timeColumnCandidates!;
+    for (const name of candidates) {
+      const found = this.columnsFound.find((c) => c.toLowerCase() === name.toLowerCase());
+      if (found !== undefined) return found;
+    }
+    const option = this.options.optionNames?.timeColumn ?? 'timeColumn';
+    throw new InputError(where, `no time column: none is called ${candidates.map((c) => `"${c}"`).join(', ')}; name it (${option}) or give the sample rate; the columns found are ${this.columnsFound.map((c) => `"${c}"`).join(', ')}`);
   }
 
   /**
@@ -215,12 +231,12 @@ export class SensorLogReader {
     }
     const arrays = this.columns.map((c) => c.toFloat64Array());
     const values = arrays.slice(0, this.options.valueColumns.length);
-    if (this.options.timeColumn === undefined) return { columnsFound: this.columnsFound, values, rowCount: this.rows, headerLine: this.headerLine };
+    if (this.timeColumn === undefined) return { columnsFound: this.columnsFound, values, rowCount: this.rows, headerLine: this.headerLine };
     const timeS = arrays[arrays.length - 1];
     if (this.timeFactorToSI !== 1) for (let i = 0; i < timeS.length; i++) timeS[i] *= this.timeFactorToSI;
     const timeName = this.layout!.names[this.layout!.names.length - 1];
     const axis = checkTimeAxis(timeS, this.lines, this.source, timeName, this.options.gapTolerance ?? DEFAULT_GAP_TOLERANCE);
-    return { columnsFound: this.columnsFound, values, timeS, rateHz: axis.rateHz, rowCount: this.rows, headerLine: this.headerLine };
+    return { columnsFound: this.columnsFound, values, timeColumn: timeName, timeS, rateHz: axis.rateHz, rowCount: this.rows, headerLine: this.headerLine };
   }
 }
 

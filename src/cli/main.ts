@@ -20,7 +20,8 @@ usage:
       validate the file and evaluate its cells without running the analysis
   sigma-ledger allan LOG --column NAME --unit UNIT [--time-column NAME] [--time-unit U]
                      [--rate HZ] [--kind gyro|accelerometer|speed] [--gap-tolerance REL] [--json]
-      overlapping Allan deviation of a static log (CSV or TSV) and its IEEE Std 952
+      overlapping Allan deviation of a static log (CSV or TSV; without --time-column or
+      --rate, a column named time, t or time_s is the time axis) and its IEEE Std 952
       noise terms, read off by slope and fitted over the whole curve; with
       --into BUDGET --sensor ID [--terms slope|fit] the terms are written into
       that sensor's rows with "fitted from LOG, DATE, N samples" as provenance

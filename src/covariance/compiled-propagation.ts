@@ -52,7 +52,7 @@ export function genericKernel(phi: SparseRows): PropagationKernel {
  * same numbers, bit for bit) at the unrolled speed for every state count
  * (see the state-count sweep in `npm run bench`).
  */
-export const BLOCK_TERMS = 400;
+export const BLOCK_TERMS = 600;
 
 /** The generated forms: one straight-line block (small models) or several. */
 export type KernelForm = 'unrolled' | 'blocked' | 'row-loop';

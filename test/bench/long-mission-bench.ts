@@ -16,9 +16,9 @@ const FACTOR = 60;
 
 interface LongRun { engineMs: number; totalMs: number; peakMB: number; jsonChars: number; verdict: unknown }
 
-function run(srcDir: string, every: number): LongRun | string {
+function run(srcDir: string, every: number, factor = FACTOR, landmarks = 0): LongRun | string {
   try {
-    const out = execFileSync(process.execPath, ['--import', 'tsx', child, srcDir, String(FACTOR), String(every)], { encoding: 'utf8', stdio: ['ignore', 'pipe', 'pipe'] });
+    const out = execFileSync(process.execPath, ['--import', 'tsx', child, srcDir, String(factor), String(every), String(landmarks)], { encoding: 'utf8', stdio: ['ignore', 'pipe', 'pipe'] });
     return JSON.parse(out.trim().split('\n').pop()!) as LongRun;
   } catch (e) {
     return `failed: ${(e as Error).message.split('\n')[0]}`;
@@ -44,3 +44,7 @@ if (typeof auto !== 'string' && typeof every10 !== 'string') {
     && (oldRun === undefined || typeof oldRun === 'string' || JSON.stringify(oldRun.verdict) === JSON.stringify(auto.verdict));
   console.log(`  verdicts and times-to-exceed identical across runs: ${same}`);
 }
+
+console.log('64 visible landmarks (range-bearing at 10 Hz, 128 scalar measurements a step, R2\'s 10 minutes; target < 300 MB peak):');
+if (baseline) console.log(line('old code (schedule built up front)', run(baseline, 0, 1, 64)));
+console.log(line('new (schedule generated as the run goes)', run(resolve(here, '../../src'), 0, 1, 64)));
