@@ -7,6 +7,10 @@
  * n^3.2, and no step to a larger model more than 1.5 times slower per
  * multiply-add. With BASELINE_SRC=<older checkout>/src the old kernel (one
  * unrolled function) runs beside the new one in the same process.
+ *
+ * Run with `node --no-concurrent-recompilation` (npm run bench does): V8
+ * optimises a large generated function on a background thread, which on a
+ * shared, loaded machine can lag by seconds and would time the interpreter.
  */
 import { pathToFileURL } from 'node:url';
 import { resolve } from 'node:path';
