@@ -1,7 +1,7 @@
 /**
  * From an Allan curve in SI to the noise-term rows a budget grid takes: the
  * slope read-offs (method "slope"), the whole-curve fit (method "fit"), and
- * the bias-instability row as ENGINE.md §3 writes a fitted value (the floor,
+ * the bias-instability row as docs/planar-model.md §3 writes a fitted value (the floor,
  * kind "floor", with T_bi = τ_floor / 1.8926).
  */
 import { convert, formatSignificant } from '../units';
@@ -45,7 +45,7 @@ export interface NoiseTermRow {
   readonly readAtTauS?: number;
 }
 
-/** The bias-instability row in the form ENGINE.md §3 stores a fitted value. */
+/** The bias-instability row in the form docs/planar-model.md §3 stores a fitted value. */
 export interface BiasInstabilityRow {
   /** The row holds the Allan floor (not the flicker coefficient). */
   readonly kind: 'floor';
@@ -105,7 +105,7 @@ function biasRow(kind: AllanSensorKind, r: TermReading, sourceName: string): Bia
   const correlationTimeS = gaussMarkovCorrelationTimeFromFloorTau(r.readAtTauS);
   const provenance =
     `Allan deviation floor ${formatSignificant(floor, 4)} ${lab.unit} at τ = ${formatSignificant(r.readAtTauS, 4)} s, ` +
-    `read from ${sourceName}; T_bi = τ_floor / ${formatSignificant(GM_ALLAN_PEAK_U, 7)} = ${formatSignificant(correlationTimeS, 4)} s (ENGINE.md §3)`;
+    `read from ${sourceName}; T_bi = τ_floor / ${formatSignificant(GM_ALLAN_PEAK_U, 7)} = ${formatSignificant(correlationTimeS, 4)} s (docs/planar-model.md §3)`;
   return {
     kind: 'floor', floor, unit: lab.unit, floorSI: r.deviation, unitSI: lab.unitSI, tauFloorS: r.readAtTauS,
     correlationTimeS, uncertainty: floor * r.relativeUncertainty, provenance,

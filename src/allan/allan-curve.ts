@@ -8,7 +8,7 @@ import { centredCumulativeSum, nonOverlappingFromCumulative, sumSquaredSecondDif
 import { DEFAULT_POINTS_PER_DECADE, logSpacedClusterSizes } from './cluster-sizes';
 import { allanPercentageError } from './percentage-error';
 
-/** Which estimator a curve uses (REFERENCES.md §1.2). */
+/** Which estimator a curve uses (docs/checks.md §1.2). */
 export type AllanEstimator = 'overlapping' | 'non-overlapping';
 
 /**

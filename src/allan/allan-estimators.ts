@@ -1,7 +1,7 @@
 /**
  * Allan variance estimators for one cluster size m, on uniformly spaced
  * samples (IEEE Std 952-1997 Annex C; El-Sheimy, Hou & Niu, IEEE Trans.
- * Instrum. Meas. 57(1):140–149, 2008; formulas as written in REFERENCES.md §1.2).
+ * Instrum. Meas. 57(1):140–149, 2008; formulas as written in docs/checks.md §1.2).
  *
  * Rate samples y₁…y_N at spacing τ₀, τ = mτ₀, cluster means ȳ_k(m):
  * - non-overlapping, K = ⌊N/m⌋ clusters:
@@ -71,7 +71,7 @@ export function checkClusterSize(m: number, limit: number, what: string): void {
 
 /**
  * Fully overlapping Allan variance of rate samples at cluster size m
- * (REFERENCES.md §1.2, fully overlapping form).
+ * (docs/checks.md §1.2, fully overlapping form).
  * @param rate rate samples y₁…y_N in any unit, N ≥ 2.
  * @param m cluster size, 1 ≤ m ≤ N/2.
  * @returns σ²(mτ₀) in the samples' unit squared.
@@ -85,7 +85,7 @@ export function overlappingAllanVariance(rate: Float64Array, m: number): number 
 
 /**
  * Non-overlapping Allan variance of rate samples at cluster size m
- * (REFERENCES.md §1.2, non-overlapping form); trailing samples that do not
+ * (docs/checks.md §1.2, non-overlapping form); trailing samples that do not
  * fill a cluster are left out.
  * @param rate rate samples y₁…y_N in any unit, N ≥ 2.
  * @param m cluster size, 1 ≤ m ≤ N/2 (so that K ≥ 2 clusters).
@@ -115,7 +115,7 @@ export function nonOverlappingFromCumulative(c: Float64Array, n: number, m: numb
 
 /**
  * Overlapping Allan variance from angle samples θ₀…θ_{L−1} (the θ form of
- * REFERENCES.md §1.2). Pass θ₀ = 0 as the first sample when the angles are
+ * docs/checks.md §1.2). Pass θ₀ = 0 as the first sample when the angles are
  * integrated from rates: without it (L = N) one term is lost and the result
  * differs from the rate form (the toy set gives 1.875 instead of 1.9).
  * @param angle angle samples in any unit (rad, deg, m for distance ...), L ≥ 3.

@@ -1,8 +1,8 @@
 /**
  * Bias instability read from the floor of an Allan deviation curve:
  * B = floor / √(2 ln 2/π) = floor / 0.664282 (IEEE Std 952-1997 Annex C, as in
- * REFERENCES.md §1.1), with the τ of the floor kept for the Gauss-Markov
- * reading of ENGINE.md §3 (T_bi = τ_floor / 1.8926).
+ * docs/checks.md §1.1), with the τ of the floor kept for the Gauss-Markov
+ * reading of docs/planar-model.md §3 (T_bi = τ_floor / 1.8926).
  *
  * How the floor is found (a choice of this project; only points with δ ≤ 0.1
  * take part, as in slope-readoff.ts, so that noise in the last decade of a
@@ -13,7 +13,7 @@
  *    decade).
  * 2. Where the slope crosses zero more than once, the highest stationary
  *    level is taken. A Gauss-Markov bias shows as a bump after the valley where
- *    white noise meets its rising edge; ENGINE.md §3 models the bias by a
+ *    white noise meets its rising edge; docs/planar-model.md §3 models the bias by a
  *    Gauss-Markov process whose Allan peak equals the floor, so the bump's
  *    peak is the level to keep. A flat flicker floor gives crossings at
  *    nearly one level, and any of them serves.

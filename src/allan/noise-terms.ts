@@ -1,7 +1,7 @@
 /**
  * The five IEEE Std 952 noise terms as Allan variance curves, with the slope
  * and read-off point of each (IEEE Std 952-1997 Annex C, as tabulated in
- * REFERENCES.md §1.1; read-off points also in the MEMS Industry Group's
+ * docs/checks.md §1.1; read-off points also in the MEMS Industry Group's
  * "Standard Sensor Performance Parameters"):
  *
  * | term              | σ²(τ)           | slope of log σ | read-off            |

@@ -3,10 +3,10 @@
  *   δ(τ) = 1 / √(2(N/n − 1)),
  * N samples, n samples per cluster, N/n independent clusters
  * (IEEE Std 952-1997 Annex C; El-Sheimy, Hou & Niu 2008; as recorded in
- * REFERENCES.md §1.3, formula from memory there, not confirmed).
+ * docs/checks.md §1.3, formula from memory there, not confirmed).
  *
  * It is an approximation that UNDERSTATES the real scatter: Monte-Carlo runs
- * on white noise (REFERENCES.md §1.3) show the actual spread of the
+ * on white noise (docs/checks.md §1.3) show the actual spread of the
  * non-overlapping estimate about 20 % larger (8.77 % against 7.1 % at K = 100,
  * 27.2 % against 23.6 % at K = 10), because adjacent differences share a
  * cluster and are correlated. The overlapping estimator scatters less than the

@@ -1,14 +1,14 @@
 /**
  * Names and units of the noise terms for each kind of sensor a log can come
- * from. SI units follow ENGINE.md §1 (rad/√s for angle random walk, rad/s for
+ * from. SI units follow docs/planar-model.md §1 (rad/√s for angle random walk, rad/s for
  * bias instability, rad/s/√s for rate random walk); display units are the
- * trade's (REFERENCES.md §2): a gyro's terms in deg/√h, deg/h, deg/h/√h
+ * trade's (docs/checks.md §2): a gyro's terms in deg/√h, deg/h, deg/h/√h
  * whether its log is in deg/s or deg/h.
  *
  * The third kind, a speed sensor (odometer, water-speed log), is outside
  * IEEE Std 952 and 1293; its white-noise term integrates to a distance
  * random walk and is named so. Its display unit m/s/√Hz is the engine's
- * speed white-noise density (ENGINE.md §3).
+ * speed white-noise density (docs/planar-model.md §3).
  */
 import type { DimensionName } from '../units';
 import type { NoiseTermId } from './noise-terms';

@@ -3,7 +3,7 @@
  * +½, +1) the region of the curve where the local log–log slope is nearest α
  * is found, a line of slope exactly α is fitted to it, and the line is read
  * at the term's reference τ (√3, 1, 3, √2 s; IEEE Std 952-1997 Annex C as in
- * REFERENCES.md §1.1). Bias instability is read from the floor instead
+ * docs/checks.md §1.1). Bias instability is read from the floor instead
  * (floor-reading.ts).
  *
  * Choices of this project (common practice, no source):

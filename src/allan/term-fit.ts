@@ -14,7 +14,7 @@
  * Standard errors come from (AᵀWA)⁻¹ on the terms in use, inflated by the
  * reduced χ² when it exceeds 1 (common practice, no source). They treat the
  * points as independent, which overlapping estimates at neighbouring τ are
- * not, and δ itself understates the scatter (REFERENCES.md §1.3): read them
+ * not, and δ itself understates the scatter (docs/checks.md §1.3): read them
  * as a lower limit of the real uncertainty.
  */
 import { InputError } from '../errors';

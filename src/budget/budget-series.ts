@@ -2,10 +2,10 @@ import type { ErrorModel } from '../covariance/error-model';
 import type { CovarianceHistory, RecordedEntries } from '../covariance/run-covariance';
 import type { NominalTrajectory } from '../mission/nominal-trajectory';
 import { fastRadiusForProbability } from './horizontal-radius-table';
+import { quantitySpec, VARIANCE_QUANTITIES, type VarianceQuantity } from '../inputs/quantities';
 
-/** Quantities reported as variances with per-source contributions (ENGINE.md §8). */
-export const VARIANCE_QUANTITIES = ['heading', 'speed', 'north', 'east', 'along-track', 'cross-track', 'drms'] as const;
-export type VarianceQuantity = (typeof VARIANCE_QUANTITIES)[number];
+/** Quantities reported as variances with per-source contributions (docs/planar-model.md §8), from the quantity table. */
+export { VARIANCE_QUANTITIES, type VarianceQuantity };
 
 /** One quantity's variance over time: the total and each source's share (they sum to the total). */
 export interface VarianceSeries {
@@ -25,16 +25,13 @@ export interface BudgetSeries {
   r95M: Float64Array;
 }
 
-const UNITS: Record<VarianceQuantity, string> = {
-  heading: 'rad²', speed: '(m/s)²', north: 'm²', east: 'm²', 'along-track': 'm²', 'cross-track': 'm²', drms: 'm²',
-};
 
 /**
  * Turns the recorded covariance entries into variance series at the recorded
  * steps (every step unless the run was thinned by a record plan). North/east
  * come from the path frame by the heading: north = [cos, -sin] p, east =
  * [sin, cos] p. Speed is v² P[so,so] plus the speed sensor's per-sample white
- * variance while moving; heading adds any angle-quantum variance (ENGINE.md §8).
+ * variance while moving; heading adds any angle-quantum variance (docs/planar-model.md §8).
  */
 export function buildBudgetSeries(model: ErrorModel, traj: NominalTrajectory, hist: CovarianceHistory): BudgetSeries {
   return seriesOf(model, traj, hist.entries, hist.recordedSteps, hist.sourceCount, true);
@@ -55,8 +52,8 @@ function seriesOf(
 ): BudgetSeries {
   const steps = at.length;
   const quantities: Partial<Record<VarianceQuantity, VarianceSeries>> = {};
-  const names: VarianceQuantity[] = model.hasSpeedInput ? [...VARIANCE_QUANTITIES] : ['heading'];
-  for (const q of names) quantities[q] = { unitSI: UNITS[q], total: new Float64Array(steps), bySource: [] };
+  const names = VARIANCE_QUANTITIES.filter((q) => model.hasSpeedInput || !quantitySpec(q).needsSpeedInput);
+  for (const q of names) quantities[q] = { unitSI: quantitySpec(q).varianceUnitSI!, total: new Float64Array(steps), bySource: [] };
   // cos/sin of the heading once per step, shared by the total and every source.
   const cos = new Float64Array(steps), sin = new Float64Array(steps), speed = new Float64Array(steps), tS = new Float64Array(steps);
   for (let r = 0; r < steps; r++) {

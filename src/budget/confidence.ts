@@ -1,6 +1,6 @@
 /**
  * Confidence levels for one-dimensional (normally distributed) quantities
- * (ENGINE.md §8: 1 sigma, 2 sigma, 95 %), and the standard normal quantile
+ * (docs/planar-model.md §8: 1 sigma, 2 sigma, 95 %), and the standard normal quantile
  * they need.
  */
 

@@ -1,8 +1,8 @@
 /**
  * Radius of the circle, centred on the true position, that holds a given
- * fraction of a zero-mean bivariate normal horizontal error (ENGINE.md §8:
+ * fraction of a zero-mean bivariate normal horizontal error (docs/planar-model.md §8:
  * CEP at 50 %, R95 at 95 %), computed exactly from the 2 x 2 covariance
- * rather than from the circular approximations (REFERENCES.md §6).
+ * rather than from the circular approximations (docs/checks.md §6).
  */
 
 import { InputError } from '../errors';

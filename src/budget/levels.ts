@@ -1,23 +1,25 @@
 import { InputError } from '../errors';
-import type { ConfidenceLevel, QuantityName } from '../inputs/budget-input';
+import type { ConfidenceLevel } from '../inputs/budget-input';
+import { QUANTITY_NAMES, quantitySpec, type QuantityName } from '../inputs/quantities';
 import type { BudgetSeries, VarianceQuantity } from './budget-series';
 import { confidenceFactor1D } from './confidence';
+import type { DimensionName } from '../units';
 
 /** The levels a requirement may use. */
 export const LEVELS: readonly ConfidenceLevel[] = ['1sigma', '2sigma', '95%', '50%'];
 
-/** The quantities a requirement may constrain. */
-export const QUANTITY_NAMES: readonly QuantityName[] = ['heading', 'speed', 'north', 'east', 'along-track', 'cross-track', 'horizontal'];
+/** The quantities a requirement may constrain (from the quantity table, src/inputs/quantities.ts). */
+export { QUANTITY_NAMES };
 
-/** Dimension of a quantity's limit. */
-export function limitDimension(q: QuantityName): 'angle' | 'speed' | 'length' {
-  return q === 'heading' ? 'angle' : q === 'speed' ? 'speed' : 'length';
+/** Dimension of a quantity's limit. Throws nothing for a quantity of the table. */
+export function limitDimension(q: QuantityName): DimensionName {
+  return quantitySpec(q).dimension;
 }
 
 /**
  * The series a requirement compares with its limit, in SI: a 1-D quantity's
  * sigma times the level's factor; for 'horizontal', DRMS (1σ), 2DRMS (2σ),
- * the exact R95 (95 %) or CEP (50 %) (ENGINE.md §8).
+ * the exact R95 (95 %) or CEP (50 %) (docs/planar-model.md §8).
  * @throws InputError when the suite does not produce the quantity.
  */
 export function levelSeries(series: BudgetSeries, quantity: QuantityName, level: ConfidenceLevel, path: string): Float64Array {

@@ -76,7 +76,7 @@ export function resolveRequirements(list: RequirementInput[] | undefined, durati
 
 /**
  * Verdict, margin and time-to-exceed for each outage of each aiding sensor
- * (ENGINE.md §8): pass when the value stays <= limit at every step in the
+ * (docs/planar-model.md §8): pass when the value stays <= limit at every step in the
  * window; the break time is interpolated linearly between steps.
  */
 export function evaluateRequirement(req: ResolvedRequirement, series: BudgetSeries, streams: MeasurementStream[]): RequirementResult {

@@ -44,7 +44,7 @@ const MAX_DOUBLINGS = 20;
 
 /**
  * The largest value of one row's magnitude that still meets a requirement,
- * by bisection (ENGINE.md §9): for an optimal filter the covariance never
+ * by bisection (docs/planar-model.md §9): for an optimal filter the covariance never
  * decreases when a noise magnitude grows, so pass/fail changes once.
  * Correlation times are not monotone and cannot be sized this way.
  * @param sourceId `sensorId.rowId`.

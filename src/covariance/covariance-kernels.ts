@@ -67,9 +67,9 @@ export function multiplySparseVector(
 }
 
 /**
- * Joseph-form update of one matrix with a fixed gain K (ENGINE.md §6):
+ * Joseph-form update of one matrix with a fixed gain K (docs/planar-model.md §6):
  * (I − K hᵀ) X (I − K hᵀ)ᵀ + K r Kᵀ = X − K uᵀ − u Kᵀ + (hᵀXh + r) K Kᵀ, u = X h.
- * With K from the total P this is the fixed-gain recursion of ENGINE.md §7
+ * With K from the total P this is the fixed-gain recursion of docs/planar-model.md §7
  * (Gelb 1974, sec. 7.3), applied to one source's share with its own r.
  */
 export function josephUpdateInPlace(

@@ -6,7 +6,7 @@ import { RampDiscretiser } from './ramp-discretisation';
 
 /**
  * Φ and Q_d for every step of a run, computed once per constant-speed
- * segment for full steps (ENGINE.md §4: the error dynamics are time
+ * segment for full steps (docs/planar-model.md §4: the error dynamics are time
  * invariant in the path frame there), interpolated in speed on ramps, and
  * per piece where a step straddles a segment boundary.
  */

@@ -29,7 +29,7 @@ export type DiscretisationMethod = 'van-loan' | 'series';
  * Discretises the model over a piece of length dtS at speed v and turn rate w
  * (constant over the piece), once per noise channel with unit PSD; Q_d is
  * linear in the PSD, so each source's Q_d is its PSDs times its channels'
- * unit Q_d (ENGINE.md §4: never slice a total Q_d). Van Loan's method by
+ * unit Q_d (docs/planar-model.md §4: never slice a total Q_d). Van Loan's method by
  * default; `series` evaluates the same integrals by power series, cheaper
  * when F changes every step (speed ramps).
  */

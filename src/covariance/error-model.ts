@@ -1,11 +1,11 @@
 /**
  * The linearised error-state model assembled from the suite's rows
- * (ENGINE.md §3, §5): which states exist, how each source feeds P0, the
+ * (docs/planar-model.md §3, §5): which states exist, how each source feeds P0, the
  * continuous process noise and R, and which measurements are made when.
  *
  * Position error states are kept in the path frame (along-track, cross-track)
  * where, on a segment of constant speed and turn rate, the dynamics are time
- * invariant (ENGINE.md §4); north/east come from a rotation by the heading.
+ * invariant (docs/planar-model.md §4); north/east come from a rotation by the heading.
  */
 
 /** A unit-conversion step, kept so R and Q entries trace back to their rows. */
@@ -40,7 +40,7 @@ export interface MeasurementNoisePiece {
   derivation: string;
 }
 
-/** One error source with every piece of P0, Q and R it owns (ENGINE.md §7). */
+/** One error source with every piece of P0, Q and R it owns (docs/planar-model.md §7). */
 export interface ModelSource {
   /** `sensorId.rowId`, or `mission.initialPosition` / `mission.initialHeading`. */
   id: string;
@@ -122,4 +122,6 @@ export interface ErrorModel {
   dynamics(speedMps: number, turnRateRadps: number): Float64Array;
   /** True when the suite has a speed input (speed outputs exist). */
   hasSpeedInput: boolean;
+  /** SI unit of what each measurement measures, by noise key (`gnss.north` -> `m`), as the sensor kinds declare it. */
+  measurementUnitsSI: Readonly<Record<string, string>>;
 }

@@ -15,7 +15,7 @@ export interface ScheduledMeasurement {
   rTotal: number;
 }
 
-/** Whether a measurement at tS falls in a half-open outage [start, end) (ENGINE.md §5, 1e-9 s slack). */
+/** Whether a measurement at tS falls in a half-open outage [start, end) (docs/planar-model.md §5, 1e-9 s slack). */
 export function inOutage(outages: { startS: number; endS: number }[], tS: number): boolean {
   return outages.some((o) => tS >= o.startS - TIME_SLACK_S && tS < o.endS - TIME_SLACK_S);
 }
@@ -24,7 +24,7 @@ export function inOutage(outages: { startS: number; endS: number }[], tS: number
  * The scalar measurements of the mission, generated step by step as the run
  * asks for them (nothing is stored ahead: 64 visible landmarks at 10 Hz
  * would be about a gigabyte): a sensor at rate f measures at t = j/f and is
- * processed at the first boundary at or after t, in sensor order (ENGINE.md
+ * processed at the first boundary at or after t, in sensor order (docs/planar-model.md
  * §5). A geometry error (a landmark on the path) is thrown as the
  * InputError the stream raises, when the run reaches that measurement.
  */

@@ -27,6 +27,7 @@ export class ModelBuilder {
   readonly sources: ModelSource[] = [];
   readonly streams: MeasurementStream[] = [];
   readonly core: CoreStates;
+  private readonly measurementUnits: Record<string, string> = {};
   hasSpeedInput = false;
 
   constructor() {
@@ -36,7 +37,7 @@ export class ModelBuilder {
       heading: this.state('heading', { name: 'heading error', unitSI: 'rad', calibration: false }),
       speedScale: -1,
     };
-    // Path-frame kinematics (ENGINE.md §3 rotated by the heading): the frame turns at w.
+    // Path-frame kinematics (docs/planar-model.md §3 rotated by the heading): the frame turns at w.
     this.term(this.core.along, this.core.cross, { perTurnRate: 1 });
     this.term(this.core.cross, this.core.along, { perTurnRate: -1 });
     this.term(this.core.cross, this.core.heading, { perSpeed: 1 });
@@ -59,6 +60,11 @@ export class ModelBuilder {
     return s;
   }
 
+  /** The index of the state with this key, or undefined when none was created. Throws nothing. */
+  stateIndex(key: string): number | undefined {
+    return this.stateKeys.get(key);
+  }
+
   /** Whether a state with this key exists yet. */
   hasState(key: string): boolean {
     return this.stateKeys.has(key);
@@ -67,6 +73,11 @@ export class ModelBuilder {
   /** Adds F[row, col] += constant + perSpeed v + perTurnRate w. */
   term(row: number, col: number, c: { constant?: number; perSpeed?: number; perTurnRate?: number }): void {
     this.terms.push({ row, col, constant: c.constant ?? 0, perSpeed: c.perSpeed ?? 0, perTurnRate: c.perTurnRate ?? 0 });
+  }
+
+  /** Records the SI unit of what the measurement with noise key `key` measures (R is in its square). */
+  measurementUnit(key: string, unitSI: string): void {
+    this.measurementUnits[key] = unitSI;
   }
 
   /** The index of the white-noise channel driving `stateIndex`, created on first use. */
@@ -90,6 +101,7 @@ export class ModelBuilder {
       sources: this.sources.slice(),
       streams: this.streams.slice(),
       hasSpeedInput: this.hasSpeedInput,
+      measurementUnitsSI: { ...this.measurementUnits },
       dynamics(speedMps: number, turnRateRadps: number): Float64Array {
         const f = new Float64Array(n * n);
         for (const t of terms) f[t.row * n + t.col] += t.constant + t.perSpeed * speedMps + t.perTurnRate * turnRateRadps;

@@ -72,7 +72,7 @@ interface RunState {
 }
 
 /**
- * Runs the covariance analysis with per-source contributions (ENGINE.md §6,
+ * Runs the covariance analysis with per-source contributions (docs/planar-model.md §6,
  * §7): the total P drives the gains; every source's P_s goes through the
  * same Φ and gains with only its own P0, Q_d and R pieces, so Σ P_s = P.
  */

@@ -1,7 +1,7 @@
 /**
  * A matrix stored by compressed rows. Φ of the planar model has about 30 of
  * 144 entries non-zero, and the propagation loop over every source's
- * covariance is where the engine spends its time (TOOLCHAIN.md: sparse rows
+ * covariance is where the engine spends its time (DEVELOPERS.md: sparse rows
  * are about 6x faster than dense loops here).
  */
 export interface SparseRows {

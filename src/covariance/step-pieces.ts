@@ -14,7 +14,7 @@ export interface StepPiece {
 /**
  * Splits the step (t_{k-1}, t_k] at segment boundaries. On a speed ramp the
  * speed is taken at the piece's midpoint (second-order accurate in the step;
- * ENGINE.md §4 allows F at the step's start); elsewhere F is exact.
+ * docs/planar-model.md §4 allows F at the step's start); elsewhere F is exact.
  */
 export function stepPieces(traj: NominalTrajectory, k: number): StepPiece[] {
   const t0 = traj.tS[k - 1], t1 = traj.tS[k];

@@ -1,6 +1,6 @@
 /**
  * Discretisation of a linear time-invariant error model over one step by Van
- * Loan's block-exponential method (ENGINE.md §4).
+ * Loan's block-exponential method (docs/planar-model.md §4).
  *
  * Source: C. F. Van Loan, "Computing integrals involving the matrix
  * exponential", IEEE Trans. Automatic Control AC-23(3):395–404, 1978. For
@@ -24,7 +24,7 @@ export interface DiscreteModel {
  * Φ and Q_d for a step of length dtS.
  *
  * Q_d is linear in G Q_c Gᵀ, so per-source Q_d comes from calling this with
- * each source's own G Q_c Gᵀ (ENGINE.md §4); never slice a total Q_d.
+ * each source's own G Q_c Gᵀ (docs/planar-model.md §4); never slice a total Q_d.
  *
  * @param f continuous dynamics F, row-major n x n, in 1/s (state units per
  *   state unit per second); frame is whatever frame the states are in.

@@ -1,5 +1,5 @@
 /**
- * From an Allan analysis to the rows a budget grid takes (ENGINE.md §3):
+ * From an Allan analysis to the rows a budget grid takes (docs/planar-model.md §3):
  * - angle random walk: a white-noise row in the term's unit (deg/√h; a
  *   speed log's noise density in m/s/√Hz); where a sensor refuses the
  *   density form, the same noise as a per-sample σ = N·√f at the log's

@@ -6,23 +6,26 @@
 import type { AllanSensorKind } from '../allan/sensor-term-units';
 import type { BudgetDocument } from '../document';
 import type { SensorKind, SourceKind } from '../inputs/budget-input';
-import { SENSOR_KINDS } from '../sensors/registry';
+import { SENSOR_KIND_NAMES, SENSOR_KINDS } from '../sensors/registry';
+import type { SensorKindSpec } from '../sensors/sensor-kind';
 import { unitDimension, type DimensionName } from '../units';
 import { rowDimensions } from './unit-choices';
 
-/** The budget's sensor kind that takes each log kind's noise terms; none takes an accelerometer's. */
+/** The first sensor kind (registry order) whose `logs` satisfy `test`. */
+const firstKind = (test: (logs: NonNullable<SensorKindSpec['logs']>) => boolean): SensorKind | undefined =>
+  SENSOR_KIND_NAMES.find((k) => test(SENSOR_KINDS[k].logs ?? {}));
+
+/** The budget's sensor kind that takes each log kind's noise terms (the kinds' `logs.allan`); none takes an accelerometer's. */
 export const ALLAN_TARGET_KIND: Readonly<Record<AllanSensorKind, SensorKind | undefined>> = {
-  gyro: 'yaw-gyro',
-  accelerometer: undefined,
-  speed: 'wheel-speed',
+  gyro: firstKind((l) => l.allan === 'gyro'),
+  accelerometer: firstKind((l) => l.allan === 'accelerometer'),
+  speed: firstKind((l) => l.allan === 'speed'),
 };
 
-/** The sensor kind a calibration log's unit points at: rates to a gyro, speeds to a wheel-speed sensor, angles to a compass. */
-export const CALIBRATION_TARGET_KIND: Readonly<Partial<Record<DimensionName, SensorKind>>> = {
-  'angular-rate': 'yaw-gyro',
-  'speed': 'wheel-speed',
-  'angle': 'compass',
-};
+/** The sensor kind a calibration log's unit points at (the kinds' `logs.calibration`): rates to a gyro, speeds to a wheel-speed sensor, angles to a compass. */
+export const CALIBRATION_TARGET_KIND: Readonly<Partial<Record<DimensionName, SensorKind>>> = Object.fromEntries(
+  SENSOR_KIND_NAMES.flatMap((k) => (SENSOR_KINDS[k].logs?.calibration ?? []).map((d) => [d, k])),
+);
 
 /** A sensor of the document a result may go into. */
 export interface TargetSensor {

@@ -1,30 +1,14 @@
 /**
  * Which units a unit picker offers: the dimensions a field accepts, from the
- * source-kind registry, narrowed by the sensor kind where the sensor takes
- * only some of them (a compass's turn-on bias is an angle, a gyro's an
- * angular rate), then each dimension's picker list from src/units.
+ * source-kind registry, narrowed by what the sensor kind declares for the
+ * row's magnitude (a compass's turn-on bias is an angle, a gyro's an
+ * angular rate: src/sensors/<kind>.ts, `rows`), then each dimension's
+ * picker list from src/units.
  */
 import type { SensorKind, SourceKind } from '../inputs/budget-input';
+import { SENSOR_KINDS } from '../sensors/registry';
 import { SOURCE_KINDS } from '../sources/registry';
 import { DIMENSIONS, DIMENSION_NAMES, unitDimension, type DimensionName } from '../units';
-
-/**
- * What each sensor kind accepts for a row's magnitude, where that is fewer
- * dimensions than the source kind allows (read off src/sensors/*.ts: the
- * dimensions each `place` resolves a row with).
- */
-export const SENSOR_ROW_DIMENSIONS: Record<SensorKind, Partial<Record<SourceKind, DimensionName[]>>> = {
-  'yaw-gyro': {
-    'white-noise': ['angle-random-walk', 'angular-rate'],
-    'bias-instability': ['angular-rate'],
-    'turn-on-bias': ['angular-rate'],
-    quantisation: ['angular-rate', 'angle'],
-  },
-  'wheel-speed': { 'white-noise': ['length-random-walk', 'speed'], quantisation: ['speed'] },
-  'gnss-position': { 'white-noise': ['length'], multipath: ['length'] },
-  compass: { 'white-noise': ['angle'], 'turn-on-bias': ['angle'] },
-  'range-bearing': { 'white-noise': ['length', 'angle'], 'turn-on-bias': ['length', 'angle'] },
-};
 
 /**
  * Dimensions a row's `field` accepts on a sensor of `sensorKind`: the
@@ -34,7 +18,7 @@ export const SENSOR_ROW_DIMENSIONS: Record<SensorKind, Partial<Record<SourceKind
 export function rowDimensions(sensorKind: SensorKind, sourceKind: SourceKind, field: 'value' | 'correlationTime' | 'rate' = 'value'): DimensionName[] {
   const spec = SOURCE_KINDS[sourceKind]?.parameters.find((p) => p.field === field);
   if (!spec) return [];
-  const narrow = field === 'value' ? SENSOR_ROW_DIMENSIONS[sensorKind]?.[sourceKind] : undefined;
+  const narrow = field === 'value' ? SENSOR_KINDS[sensorKind]?.rows[sourceKind] : undefined;
   return narrow ? spec.dimensions.filter((d) => narrow.includes(d)) : [...spec.dimensions];
 }
 

@@ -8,6 +8,8 @@
  * tests hand the same object to the engine.
  */
 
+import type { QuantityName } from './quantities';
+
 /** A number as the user wrote it, with its unit text (`{ value: 0.2, unit: 'deg/√h' }`). */
 export interface Quantity {
   value: number;
@@ -50,15 +52,15 @@ export interface OutageInput {
   end: Quantity;
 }
 
-/** Kinds of error source a row can hold. */
-export type SourceKind =
-  | 'white-noise'
-  | 'bias-instability'
-  | 'rate-random-walk'
-  | 'turn-on-bias'
-  | 'scale-factor'
-  | 'quantisation'
-  | 'multipath';
+/**
+ * The error-source kinds, by name: each file in src/sources/ adds its kind
+ * here by declaration merging (the value is unused: `true`). A new kind needs
+ * no edit here.
+ */
+export interface SourceKindMap {}
+
+/** Kinds of error source a row can hold (the names of {@link SourceKindMap}). */
+export type SourceKind = keyof SourceKindMap & string;
 
 /** One grid row: one error source of one sensor. */
 export interface SourceInput {
@@ -87,8 +89,15 @@ export interface SourceInput {
   assumed?: boolean;
 }
 
-/** Kinds of sensor the planar model knows. */
-export type SensorKind = 'yaw-gyro' | 'wheel-speed' | 'gnss-position' | 'compass' | 'range-bearing';
+/**
+ * The sensor kinds, by name: each file in src/sensors/ adds its kind here by
+ * declaration merging, with the state handles it exposes to other sensors
+ * as the value (src/sensors/sensor-kind.ts). A new kind needs no edit here.
+ */
+export interface SensorKindMap {}
+
+/** Kinds of sensor the engine knows (the names of {@link SensorKindMap}). */
+export type SensorKind = keyof SensorKindMap & string;
 
 /** A known landmark for range-bearing sensors, in the mission's north/east frame. */
 export interface LandmarkInput {
@@ -115,8 +124,8 @@ export interface SensorInput {
   observables?: 'range' | 'bearing' | 'range-bearing';
 }
 
-/** Quantities the engine reports and requirements can constrain. */
-export type QuantityName = 'heading' | 'speed' | 'north' | 'east' | 'along-track' | 'cross-track' | 'horizontal';
+/** Quantities requirements can constrain: the ids of src/inputs/quantities.ts. */
+export type { QuantityName };
 
 /** Confidence levels; for 'horizontal', 1sigma is DRMS, 2sigma is 2DRMS, 95% is R95 and 50% is CEP. */
 export type ConfidenceLevel = '1sigma' | '2sigma' | '95%' | '50%';

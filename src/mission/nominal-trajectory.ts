@@ -25,7 +25,7 @@ export interface NominalTrajectory {
   segments: ResolvedSegment[];
 }
 
-/** Tolerance for comparing times on the mission clock, seconds (ENGINE.md §5). */
+/** Tolerance for comparing times on the mission clock, seconds (docs/planar-model.md §5). */
 export const TIME_SLACK_S = 1e-9;
 
 /**

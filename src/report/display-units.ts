@@ -1,4 +1,4 @@
-import type { VarianceQuantity } from '../budget/budget-series';
+import { quantitySpec, VARIANCE_QUANTITIES, type VarianceQuantity } from '../inputs/quantities';
 import { fromSI, type DimensionName } from '../units';
 
 /** How a quantity's sigma is shown: its display unit and dimension. */
@@ -8,16 +8,13 @@ export interface DisplayUnit {
   label: string;
 }
 
-/** Display units of the reported quantities (degrees for heading; the rest in SI). */
-export const DISPLAY: Record<VarianceQuantity, DisplayUnit> = {
-  heading: { unit: 'deg', dimension: 'angle', label: 'heading' },
-  speed: { unit: 'm/s', dimension: 'speed', label: 'speed' },
-  north: { unit: 'm', dimension: 'length', label: 'north' },
-  east: { unit: 'm', dimension: 'length', label: 'east' },
-  'along-track': { unit: 'm', dimension: 'length', label: 'along-track' },
-  'cross-track': { unit: 'm', dimension: 'length', label: 'cross-track' },
-  drms: { unit: 'm', dimension: 'length', label: 'DRMS' },
-};
+/** Display units of the reported quantities (degrees for heading; the rest in SI), from the quantity table. */
+export const DISPLAY = Object.fromEntries(
+  VARIANCE_QUANTITIES.map((q) => {
+    const spec = quantitySpec(q);
+    return [q, { unit: spec.displayUnit, dimension: spec.dimension, label: spec.label }];
+  }),
+) as Record<VarianceQuantity, DisplayUnit>;
 
 /** A sigma in SI shown in the quantity's display unit. */
 export function sigmaForDisplay(q: VarianceQuantity, sigmaSI: number): number {

@@ -1,20 +1,12 @@
 import type { BudgetResult } from '../pipeline';
-import type { VarianceQuantity } from '../budget/budget-series';
+import { quantitySpec, VARIANCE_QUANTITIES, type VarianceQuantity } from '../inputs/quantities';
 import { CAUTION } from './caution';
 import { confidenceFactor1D } from '../budget/confidence';
 import { DISPLAY, varianceFactor } from './display-units';
 import { traceNoise, type NoiseTrace } from './noise-trace';
 
-/** Keys of the per-step series in the JSON result, with the variance quantity each reads. */
-const SERIES_KEYS: [string, VarianceQuantity][] = [
-  ['heading_sigma_deg', 'heading'], ['speed_sigma_mps', 'speed'], ['north_sigma_m', 'north'], ['east_sigma_m', 'east'],
-  ['drms_m', 'drms'], ['along_sigma_m', 'along-track'], ['cross_sigma_m', 'cross-track'],
-];
-
-/** Short names of the quantities under `contributions`. */
-const CONTRIBUTION_KEYS: Record<VarianceQuantity, string> = {
-  heading: 'heading', speed: 'speed', north: 'north', east: 'east', drms: 'drms', 'along-track': 'along', 'cross-track': 'cross',
-};
+/** Keys of the per-step series and of the contributions in the JSON result, from the quantity table. */
+const resultKeys = (q: VarianceQuantity) => ({ series: quantitySpec(q).seriesKey!, contributions: quantitySpec(q).resultKey! });
 
 /** How long one requirement holds after an aiding sensor's outage begins (times in s from the mission start). */
 export interface OutageHoldEntry {
@@ -91,12 +83,12 @@ export function buildJsonResult(result: BudgetResult, title: string, every = 1):
   const pick = (a: ArrayLike<number>, f = (x: number) => x) => keep.map((k) => f(a[k]));
   const series: Record<string, number[]> = { t_s: pick(result.series.tS) };
   const contributions: Record<string, Record<string, number[]>> = {};
-  for (const [key, q] of SERIES_KEYS) {
+  for (const q of VARIANCE_QUANTITIES) {
     const s = result.series.quantities[q];
     if (!s) continue;
     const f = varianceFactor(q);
-    series[key] = pick(s.total, (v) => Math.sqrt(Math.max(0, v * f)));
-    contributions[CONTRIBUTION_KEYS[q]] = Object.fromEntries(s.bySource.map((b, i) => [result.model.sources[i].id, pick(b, (v) => v * f)]));
+    series[resultKeys(q).series] = pick(s.total, (v) => Math.sqrt(Math.max(0, v * f)));
+    contributions[resultKeys(q).contributions] = Object.fromEntries(s.bySource.map((b, i) => [result.model.sources[i].id, pick(b, (v) => v * f)]));
   }
   if (result.series.quantities.drms) {
     series.cep_m = pick(result.series.cepM);
@@ -124,7 +116,7 @@ export function buildJsonResult(result: BudgetResult, title: string, every = 1):
         const toDisplay = Math.sqrt(varianceFactor(qb.quantity));
         const atLevel = toDisplay * (qb.quantity === 'drms' ? 1 : confidenceFactor1D(result.reportLevel));
         return {
-          quantity: CONTRIBUTION_KEYS[qb.quantity], unit: DISPLAY[qb.quantity].unit,
+          quantity: resultKeys(qb.quantity).contributions, unit: DISPLAY[qb.quantity].unit,
           sigma: toDisplay * qb.totalSigmaSI, atLevel: atLevel * qb.totalSigmaSI,
           sources: qb.shares.map((s) => ({ id: s.sourceId, sigma: toDisplay * s.sigmaSI, atLevel: atLevel * s.sigmaSI, share: s.fraction })),
         };

@@ -30,7 +30,7 @@ const conversionsOf = (model: ErrorModel, s: number) => model.sources[s].convers
 
 /**
  * Collects every R, continuous Q (PSD per noise channel) and P0 entry with
- * the sources that own it (ENGINE.md §8: "the R and Q actually used, each
+ * the sources that own it (docs/planar-model.md §8: "the R and Q actually used, each
  * entry traced to its rows and unit conversions").
  */
 export function traceNoise(model: ErrorModel): NoiseTrace {
@@ -39,7 +39,7 @@ export function traceNoise(model: ErrorModel): NoiseTrace {
   const p0 = new Map<number, TracedEntry>();
   model.sources.forEach((src, s) => {
     for (const piece of src.measurementNoise) {
-      const e = getOrAdd(r, piece.measurement, () => ({ name: piece.measurement, unitSI: measurementUnit(piece.measurement), totalSI: 0, pieces: [] }));
+      const e = getOrAdd(r, piece.measurement, () => ({ name: piece.measurement, unitSI: squared(model.measurementUnitsSI[piece.measurement] ?? '1'), totalSI: 0, pieces: [] }));
       add(e, { sourceId: src.id, valueSI: piece.varianceSI, derivation: piece.derivation, conversions: conversionsOf(model, s) });
     }
     for (const piece of src.noise) {
@@ -67,11 +67,6 @@ function getOrAdd<K, V>(map: Map<K, V>, key: K, make: () => V): V {
 function add(e: TracedEntry, piece: TracedPiece): void {
   e.pieces.push(piece);
   e.totalSI += piece.valueSI;
-}
-
-/** R of angle measurements (compass, bearing) is in rad², of positions and ranges in m². */
-function measurementUnit(key: string): string {
-  return /\.(heading|bearing)$/.test(key) ? 'rad²' : 'm²';
 }
 
 /** "m" -> "m²", "rad/s" -> "(rad/s)²", "1" -> "1". */

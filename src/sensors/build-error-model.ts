@@ -1,23 +1,29 @@
 import { InputError } from '../errors';
 import { requireArray, requireId, requireOneOf } from '../inputs/checks';
-import type { MissionInput, SensorInput } from '../inputs/budget-input';
+import type { MissionInput, SensorInput, SensorKind } from '../inputs/budget-input';
 import { emptySource, ModelBuilder } from '../covariance/model-builder';
 import type { ErrorModel } from '../covariance/error-model';
 import type { ResolvedMission } from '../mission/resolve-mission';
 import { SENSOR_KIND_NAMES, SENSOR_KINDS } from './registry';
+import type { Placement, PlacedSuite, SensorStates } from './sensor-kind';
+import { checkSuite } from './suite-rules';
 
-/** Ids of the two sources the mission owns (ENGINE.md §7). */
+/** Ids of the two sources the mission owns (docs/planar-model.md §7). */
 export const INITIAL_POSITION_ID = 'mission.initialPosition';
 export const INITIAL_HEADING_ID = 'mission.initialHeading';
 
 /**
- * Assembles the error-state model of a suite: the mission's initial-pose
- * sources, then each sensor's states, noise and measurements, in input order.
- * @throws InputError for a suite the planar model cannot run (no yaw gyro,
- *   two speed inputs, position aiding without a speed input, duplicate ids).
+ * Assembles the error-state model of a suite in two phases: the mission's
+ * initial-pose sources, then every sensor's states, noise and sources in
+ * input order (phase 1), then every sensor's measurements (phase 2), which
+ * may use any sensor's states through {@link PlacedSuite.statesOf}.
+ * @throws InputError for a suite the planar model cannot run (the kinds'
+ *   own suite rules: one yaw gyro, one speed input, position aiding needs a
+ *   speed input) or duplicate ids.
  */
 export function buildErrorModel(sensors: SensorInput[], mission: ResolvedMission, missionNotes?: MissionInput['initialSigmaNotes']): ErrorModel {
   const list = requireArray(sensors, 'sensors');
+  list.forEach(checkSensorIds(new Set<string>()));
   checkSuite(list);
   const b = new ModelBuilder();
   const notes = missionNotes ?? {};
@@ -29,16 +35,20 @@ export function buildErrorModel(sensors: SensorInput[], mission: ResolvedMission
   const head = emptySource(INITIAL_HEADING_ID, 'mission', 'initial-heading', 'initial heading', notes.heading);
   head.initialVariance.push({ state: b.core.heading, varianceSI: mission.initialHeadingSigmaRad ** 2 });
   b.sources.push(pos, head);
-  list.forEach((sensor, i) => {
-    SENSOR_KINDS[sensor.kind].place(b, sensor, { path: `sensors[${i}]`, missionDurationS: mission.durationS });
+  const placed = list.map((sensor, i) => {
+    const spec = SENSOR_KINDS[sensor.kind];
+    for (const m of spec.measurements) b.measurementUnit(`${sensor.id}.${m.key}`, m.unitSI);
+    return { kind: sensor.kind, placement: spec.place(b, sensor, { path: `sensors[${i}]`, missionDurationS: mission.durationS }) as Placement<SensorKind> };
   });
+  const suite: PlacedSuite = {
+    statesOf: <K extends SensorKind>(kind: K) => placed.filter((p) => p.kind === kind).map((p) => p.placement.states as SensorStates<K>),
+  };
+  for (const { placement } of placed) placement.measurements?.(b, suite);
   return b.build();
 }
 
-function checkSuite(list: SensorInput[]): void {
-  const ids = new Set<string>();
-  const count: Record<string, number> = {};
-  list.forEach((s, i) => {
+function checkSensorIds(ids: Set<string>): (s: SensorInput, i: number) => void {
+  return (s, i) => {
     const p = `sensors[${i}]`;
     if (!s || typeof s !== 'object') throw new InputError(p, 'must be a sensor object');
     const id = requireId(s.id, `${p}.id`);
@@ -46,17 +56,8 @@ function checkSuite(list: SensorInput[]): void {
     if (ids.has(id)) throw new InputError(`${p}.id`, `"${id}" is used by another sensor; sensor ids must be unique`);
     ids.add(id);
     requireOneOf(s.kind, SENSOR_KIND_NAMES, `${p}.kind`);
-    count[s.kind] = (count[s.kind] ?? 0) + 1;
     checkRowIds(s, p);
-  });
-  if ((count['yaw-gyro'] ?? 0) !== 1) {
-    throw new InputError('sensors', `the planar model needs exactly one yaw-gyro (found ${count['yaw-gyro'] ?? 0})`);
-  }
-  if ((count['wheel-speed'] ?? 0) > 1) throw new InputError('sensors', 'the planar model takes one speed input (wheel-speed); found more');
-  const positionAiding = (count['gnss-position'] ?? 0) + (count['range-bearing'] ?? 0);
-  if (positionAiding > 0 && !count['wheel-speed']) {
-    throw new InputError('sensors', 'GNSS and range-bearing sensors observe position, which needs a speed input (add a wheel-speed sensor)');
-  }
+  };
 }
 
 function checkRowIds(s: SensorInput, p: string): void {

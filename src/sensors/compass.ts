@@ -3,15 +3,30 @@ import { emptySource, type ModelBuilder } from '../covariance/model-builder';
 import type { ScalarMeasurement } from '../covariance/error-model';
 import { resolveRandomConstant } from '../sources/turn-on-bias';
 import { resolveWhiteNoise } from '../sources/white-noise';
-import { eachRow, resolveOutages, sensorRateHz, type SensorContext, type SensorKindSpec } from './sensor-kind';
+import { defineSensorKind, eachRow, resolveOutages, sensorRateHz, type Placement, type SensorContext, type SensorKindSpec } from './sensor-kind';
 
-/** Compass heading, y = psi + bm + r (ENGINE.md §5). */
-export const compass: SensorKindSpec = {
+/** The compass's bias state, when a row models one. */
+export interface CompassStates {
+  bias?: number;
+}
+
+declare module '../inputs/budget-input' {
+  interface SensorKindMap {
+    compass: CompassStates;
+  }
+}
+
+/** Compass heading, y = psi + bm + r (docs/planar-model.md §5). */
+export const compass: SensorKindSpec<'compass'> = defineSensorKind({
   kind: 'compass',
   label: 'compass heading',
   role: 'aiding',
-  sourceKinds: ['white-noise', 'turn-on-bias'],
-  place(b: ModelBuilder, sensor: SensorInput, ctx: SensorContext): void {
+  defaults: { id: 'compass', rateHz: 10 },
+  rows: { 'white-noise': ['angle'], 'turn-on-bias': ['angle'] },
+  logs: { calibration: ['angle'] },
+  measurements: [{ key: 'heading', unitSI: 'rad' }],
+  suite: {},
+  place(b: ModelBuilder, sensor: SensorInput, ctx: SensorContext): Placement<'compass'> {
     const rateHz = sensorRateHz(sensor, ctx.path);
     const outages = resolveOutages(sensor, ctx);
     const key = `${sensor.id}.heading`;
@@ -31,6 +46,9 @@ export const compass: SensorKindSpec = {
       b.sources.push(src);
     });
     const rows: ScalarMeasurement[] = [{ key, noiseKey: key, hNorth: 0, hEast: 0, hStates }];
-    b.streams.push({ sensorId: sensor.id, rateHz, outages, rowsAt: () => rows });
+    return {
+      states: { bias: b.stateIndex(`${sensor.id}#bias`) },
+      measurements: (builder) => builder.streams.push({ sensorId: sensor.id, rateHz, outages, rowsAt: () => rows }),
+    };
   },
-};
+});

@@ -3,18 +3,33 @@ import { emptySource, type ModelBuilder } from '../covariance/model-builder';
 import type { ScalarMeasurement } from '../covariance/error-model';
 import { resolveMultipath } from '../sources/multipath';
 import { resolveWhiteNoise } from '../sources/white-noise';
-import { eachRow, resolveOutages, sensorRateHz, type SensorContext, type SensorKindSpec } from './sensor-kind';
+import { defineSensorKind, eachRow, resolveOutages, sensorRateHz, type Placement, type SensorContext, type SensorKindSpec } from './sensor-kind';
+
+/** The multipath states per axis (empty when multipath is folded into R or not modelled). */
+export interface GnssPositionStates {
+  multipathNorth: readonly number[];
+  multipathEast: readonly number[];
+}
+
+declare module '../inputs/budget-input' {
+  interface SensorKindMap {
+    'gnss-position': GnssPositionStates;
+  }
+}
 
 /**
- * GNSS horizontal position, y = p + m + r per axis (ENGINE.md §5). Multipath
+ * GNSS horizontal position, y = p + m + r per axis (docs/planar-model.md §5). Multipath
  * is either a Gauss-Markov state per axis (in H) or folded into R.
  */
-export const gnssPosition: SensorKindSpec = {
+export const gnssPosition: SensorKindSpec<'gnss-position'> = defineSensorKind({
   kind: 'gnss-position',
   label: 'GNSS position',
   role: 'aiding',
-  sourceKinds: ['white-noise', 'multipath'],
-  place(b: ModelBuilder, sensor: SensorInput, ctx: SensorContext): void {
+  defaults: { id: 'gnss', rateHz: 1 },
+  rows: { 'white-noise': ['length'], multipath: ['length'] },
+  measurements: [{ key: 'north', unitSI: 'm' }, { key: 'east', unitSI: 'm' }],
+  suite: { needs: { input: 'speed', because: 'it observes position' } },
+  place(b: ModelBuilder, sensor: SensorInput, ctx: SensorContext): Placement<'gnss-position'> {
     const rateHz = sensorRateHz(sensor, ctx.path);
     const outages = resolveOutages(sensor, ctx);
     const keyN = `${sensor.id}.north`;
@@ -52,6 +67,9 @@ export const gnssPosition: SensorKindSpec = {
       { key: keyN, noiseKey: keyN, hNorth: 1, hEast: 0, hStates: multipathN.map((s) => [s, 1] as [number, number]) },
       { key: keyE, noiseKey: keyE, hNorth: 0, hEast: 1, hStates: multipathE.map((s) => [s, 1] as [number, number]) },
     ];
-    b.streams.push({ sensorId: sensor.id, rateHz, outages, rowsAt: () => rows });
+    return {
+      states: { multipathNorth: multipathN, multipathEast: multipathE },
+      measurements: (builder) => builder.streams.push({ sensorId: sensor.id, rateHz, outages, rowsAt: () => rows }),
+    };
   },
-};
+});

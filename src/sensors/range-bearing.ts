@@ -3,27 +3,59 @@ import { positiveToSI, quantityToSI, requireArray, requireId, requireOneOf } fro
 import type { SensorInput, SourceInput } from '../inputs/budget-input';
 import { emptySource, type ModelBuilder } from '../covariance/model-builder';
 import type { MeasurementGeometry, ModelSource, ScalarMeasurement } from '../covariance/error-model';
-import { pickDimension } from '../sources/source-kind';
+import { pickDimension, type RowOptionSpec } from '../sources/source-kind';
 import { resolveRandomConstant } from '../sources/turn-on-bias';
 import { resolveWhiteNoise } from '../sources/white-noise';
-import { eachRow, resolveOutages, sensorRateHz, type SensorContext, type SensorKindSpec } from './sensor-kind';
+import { defineSensorKind, eachRow, resolveOutages, sensorRateHz, type Placement, type SensorContext, type SensorKindSpec } from './sensor-kind';
+
+/** The range and bearing bias states, when rows model them. */
+export interface RangeBearingStates {
+  rangeBias?: number;
+  bearingBias?: number;
+}
+
+declare module '../inputs/budget-input' {
+  interface SensorKindMap {
+    'range-bearing': RangeBearingStates;
+  }
+}
 
 /** A landmark closer than this to the nominal path makes range and bearing singular. */
 const MIN_LANDMARK_RANGE_M = 1e-3;
 
 interface Landmark { id: string; northM: number; eastM: number; path: string }
 
+/** Which observable a row belongs to; by default the one its unit says (a length is a range). */
+const COMPONENT: RowOptionSpec = {
+  field: 'component', label: 'component',
+  choices: [{ value: 'range', label: 'range' }, { value: 'bearing', label: 'bearing' }],
+  fallback: (dim) => (dim === 'angle' ? 'bearing' : 'range'),
+};
+
 /**
  * Range and bearing (relative to heading) to known landmarks within a maximum
- * range and field of view (ENGINE.md §5):
+ * range and field of view (docs/planar-model.md §5):
  * range = |L - p| + br + r, bearing = atan2(dE_L, dN_L) - psi + bb + r.
  */
-export const rangeBearing: SensorKindSpec = {
+export const rangeBearing: SensorKindSpec<'range-bearing'> = defineSensorKind({
   kind: 'range-bearing',
   label: 'range-bearing sensor',
   role: 'aiding',
-  sourceKinds: ['white-noise', 'turn-on-bias'],
-  place(b: ModelBuilder, sensor: SensorInput, ctx: SensorContext): void {
+  defaults: { id: 'ranger', rateHz: 5 },
+  rows: { 'white-noise': ['length', 'angle'], 'turn-on-bias': ['angle', 'length'] },
+  rowOptions: { 'white-noise': COMPONENT, 'turn-on-bias': COMPONENT },
+  settings: [
+    {
+      type: 'choice', field: 'observables', label: 'Observables', fallback: 'range-bearing',
+      choices: [{ value: 'range-bearing', label: 'range and bearing' }, { value: 'range', label: 'range only' }, { value: 'bearing', label: 'bearing only' }],
+    },
+    { type: 'quantity', field: 'maxRange', label: 'Maximum range', dimensions: ['length'], optional: true },
+    { type: 'quantity', field: 'fieldOfView', label: 'Field of view', dimensions: ['angle'], optional: true },
+    { type: 'landmarks' },
+  ],
+  measurements: [{ key: 'range', unitSI: 'm' }, { key: 'bearing', unitSI: 'rad' }],
+  suite: { needs: { input: 'speed', because: 'it observes position' } },
+  place(b: ModelBuilder, sensor: SensorInput, ctx: SensorContext): Placement<'range-bearing'> {
     const rateHz = sensorRateHz(sensor, ctx.path);
     const outages = resolveOutages(sensor, ctx);
     const landmarks = resolveLandmarks(sensor, ctx.path);
@@ -57,9 +89,12 @@ export const rangeBearing: SensorKindSpec = {
       }
       return rows;
     };
-    b.streams.push({ sensorId: sensor.id, rateHz, outages, rowsAt: geometryRows });
+    return {
+      states: { rangeBias: b.stateIndex(`${sensor.id}#range-bias`), bearingBias: b.stateIndex(`${sensor.id}#bearing-bias`) },
+      measurements: (builder) => builder.streams.push({ sensorId: sensor.id, rateHz, outages, rowsAt: geometryRows }),
+    };
   },
-};
+});
 
 function placeRow(
   b: ModelBuilder, src: ModelSource, sensorId: string, row: SourceInput, rateHz: number, path: string,

@@ -6,8 +6,13 @@ import type { SensorKindSpec } from './sensor-kind';
 import { wheelSpeed } from './wheel-speed';
 import { yawGyro } from './yaw-gyro';
 
-/** Every sensor kind of the planar model. */
-export const SENSOR_KINDS: Record<SensorKind, SensorKindSpec> = {
+/**
+ * Every sensor kind, in the order the page lists them. Each kind's file
+ * declares everything about itself (src/sensors/sensor-kind.ts); this list
+ * only says which kinds exist. A kind file that is not listed here fails
+ * test/sensors/kind-recipe.test.ts.
+ */
+export const SENSOR_KINDS: { readonly [K in SensorKind]: SensorKindSpec<K> } = {
   'yaw-gyro': yawGyro,
   'wheel-speed': wheelSpeed,
   'gnss-position': gnssPosition,

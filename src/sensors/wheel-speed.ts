@@ -3,19 +3,34 @@ import { emptySource, type ModelBuilder } from '../covariance/model-builder';
 import { resolveQuantisation } from '../sources/quantisation';
 import { resolveScaleFactor } from '../sources/scale-factor';
 import { resolveWhiteNoise } from '../sources/white-noise';
-import { eachRow, refuseOutages, sensorRateHz, type SensorContext, type SensorKindSpec } from './sensor-kind';
+import { defineSensorKind, eachRow, refuseOutages, sensorRateHz, type Placement, type SensorContext, type SensorKindSpec } from './sensor-kind';
+
+/** The speed sensor's scale-factor state, when a row models one. */
+export interface WheelSpeedStates {
+  scaleFactor?: number;
+}
+
+declare module '../inputs/budget-input' {
+  interface SensorKindMap {
+    'wheel-speed': WheelSpeedStates;
+  }
+}
 
 /**
  * Wheel speed / odometer (also a water-speed log, same model), integrated for
- * position: along' gets v so + nv (ENGINE.md §3). A parked wheel reads zero,
+ * position: along' gets v so + nv (docs/planar-model.md §3). A parked wheel reads zero,
  * so its white noise is off while the speed is zero.
  */
-export const wheelSpeed: SensorKindSpec = {
+export const wheelSpeed: SensorKindSpec<'wheel-speed'> = defineSensorKind({
   kind: 'wheel-speed',
   label: 'wheel-speed sensor',
   role: 'dead-reckoning',
-  sourceKinds: ['white-noise', 'scale-factor', 'quantisation'],
-  place(b: ModelBuilder, sensor: SensorInput, ctx: SensorContext): void {
+  defaults: { id: 'wheel', rateHz: 20 },
+  rows: { 'white-noise': ['length-random-walk', 'speed'], 'scale-factor': ['ratio'], quantisation: ['speed'] },
+  logs: { allan: 'speed', calibration: ['speed'] },
+  measurements: [],
+  suite: { max: 1, provides: ['speed'] },
+  place(b: ModelBuilder, sensor: SensorInput, ctx: SensorContext): Placement<'wheel-speed'> {
     refuseOutages(sensor, ctx.path);
     const rateHz = sensorRateHz(sensor, ctx.path);
     const along = b.core.along;
@@ -38,5 +53,6 @@ export const wheelSpeed: SensorKindSpec = {
       }
       b.sources.push(src);
     });
+    return { states: { scaleFactor: b.stateIndex(`${sensor.id}#sf`) } };
   },
-};
+});

@@ -8,18 +8,48 @@ import { resolveScaleFactor } from '../sources/scale-factor';
 import { pickDimension } from '../sources/source-kind';
 import { resolveRandomConstant } from '../sources/turn-on-bias';
 import { resolveWhiteNoise } from '../sources/white-noise';
-import { eachRow, refuseOutages, sensorRateHz, type SensorContext, type SensorKindSpec } from './sensor-kind';
+import { defineSensorKind, eachRow, refuseOutages, sensorRateHz, type Placement, type SensorContext, type SensorKindSpec } from './sensor-kind';
+
+/** The gyro's calibration states other sensors may reach (undefined when no row models them). */
+export interface YawGyroStates {
+  turnOnBias?: number;
+  scaleFactor?: number;
+}
+
+declare module '../inputs/budget-input' {
+  interface SensorKindMap {
+    'yaw-gyro': YawGyroStates;
+  }
+}
 
 /**
- * The yaw-rate gyro, integrated for heading (ENGINE.md §3):
+ * The yaw-rate gyro, integrated for heading (docs/planar-model.md §3):
  * dpsi' = bc + bbi + brw + w sg + ng.
  */
-export const yawGyro: SensorKindSpec = {
+export const yawGyro: SensorKindSpec<'yaw-gyro'> = defineSensorKind({
   kind: 'yaw-gyro',
   label: 'yaw-rate gyro',
   role: 'dead-reckoning',
-  sourceKinds: ['white-noise', 'bias-instability', 'rate-random-walk', 'turn-on-bias', 'scale-factor', 'quantisation'],
-  place(b: ModelBuilder, sensor: SensorInput, ctx: SensorContext): void {
+  defaults: { id: 'gyro', rateHz: 100 },
+  rows: {
+    'white-noise': ['angle-random-walk', 'angular-rate'],
+    'bias-instability': ['angular-rate'],
+    'rate-random-walk': ['rate-random-walk'],
+    'turn-on-bias': ['angular-rate'],
+    'scale-factor': ['ratio'],
+    quantisation: ['angular-rate', 'angle'],
+  },
+  rowOptions: {
+    quantisation: {
+      field: 'quantum', label: 'quantum',
+      choices: [{ value: 'rate', label: 'rate LSB' }, { value: 'angle', label: 'angle LSB' }],
+      fallback: (dim) => (dim === 'angle' ? 'angle' : 'rate'),
+    },
+  },
+  logs: { allan: 'gyro', calibration: ['angular-rate'] },
+  measurements: [],
+  suite: { min: 1, max: 1, provides: ['heading-rate'] },
+  place(b: ModelBuilder, sensor: SensorInput, ctx: SensorContext): Placement<'yaw-gyro'> {
     refuseOutages(sensor, ctx.path);
     const rateHz = sensorRateHz(sensor, ctx.path);
     eachRow(yawGyro, sensor, ctx, (row, path) => {
@@ -27,8 +57,9 @@ export const yawGyro: SensorKindSpec = {
       placeGyroRow(b, src, sensor.id, row, rateHz, path);
       b.sources.push(src);
     });
+    return { states: { turnOnBias: b.stateIndex(`${sensor.id}#bias`), scaleFactor: b.stateIndex(`${sensor.id}#sf`) } };
   },
-};
+});
 
 function placeGyroRow(b: ModelBuilder, src: ModelSource, sensorId: string, row: SourceInput, rateHz: number, path: string): void {
   const h = b.core.heading;
@@ -71,7 +102,7 @@ function placeGyroRow(b: ModelBuilder, src: ModelSource, sensorId: string, row: 
       return;
     }
     case 'quantisation': {
-      const dim = pickDimension(row.value, ['angular-rate', 'angle'], `${path}.value`);
+      const dim = pickDimension(row.value, [...yawGyro.rows.quantisation!], `${path}.value`);
       const r = resolveQuantisation(row, dim, rateHz, path);
       if (dim === 'angle') src.headingOutputVarianceSI += r.perSampleVarianceSI;
       else src.noise.push({ channel: b.channel('gyro rate noise', h), psdSI: r.psdSI, onlyWhileMoving: false, derivation: r.derivation });

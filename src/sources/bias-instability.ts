@@ -5,7 +5,13 @@ import { formatSignificant, type DimensionName } from '../units';
 import { flickerCoefficientToFloor, gaussMarkovSigmaFromAllanFloor, GM_ALLAN_PEAK_RATIO } from './gauss-markov-allan';
 import { readMagnitude, readPositive, type SourceKindSpec } from './source-kind';
 
-/** Bias instability as a first-order Gauss-Markov state (ENGINE.md §3). */
+declare module '../inputs/budget-input' {
+  interface SourceKindMap {
+    'bias-instability': true;
+  }
+}
+
+/** Bias instability as a first-order Gauss-Markov state (docs/planar-model.md §3). */
 export const biasInstabilitySpec: SourceKindSpec = {
   kind: 'bias-instability',
   label: 'bias instability',
@@ -16,6 +22,17 @@ export const biasInstabilitySpec: SourceKindSpec = {
     { field: 'value', label: 'floor or flicker coefficient', dimensions: ['angular-rate'], range: '>= 0', required: true },
     { field: 'correlationTime', label: 'correlation time', dimensions: ['time'], range: '> 0', required: true },
   ],
+  idBase: 'bi',
+  option: {
+    field: 'biasForm', label: 'bias form',
+    choices: [{ value: 'floor', label: 'Allan floor' }, { value: 'flicker-coefficient', label: 'flicker B' }],
+    fallback: () => 'floor',
+  },
+  // 100 s when the datasheet gives none: common practice, no source (docs/planar-model.md §3).
+  assumedCells: [{
+    field: 'correlationTime', value: 100, unit: 's',
+    note: 'assumed: correlation time 100 s, the usual guess when the datasheet gives none; replace it with the Allan plot\'s value',
+  }],
 };
 
 /** A Gauss-Markov bias in SI. */
@@ -32,7 +49,7 @@ export interface ResolvedGaussMarkov {
 /**
  * Resolves a bias-instability row: sigma = floor / 0.6173643 so that the
  * Gauss-Markov Allan deviation peaks at the floor (at tau = 1.8926 T), and
- * the driving PSD is 2 σ²/T (ENGINE.md §3).
+ * the driving PSD is 2 σ²/T (docs/planar-model.md §3).
  * @throws InputError for a missing or non-positive correlation time.
  */
 export function resolveBiasInstability(row: SourceInput, dimension: DimensionName, path: string): ResolvedGaussMarkov {

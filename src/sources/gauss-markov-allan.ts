@@ -1,10 +1,10 @@
 /**
  * Allan variance of a first-order Gauss-Markov rate process, and the
  * conversions from a datasheet "bias instability" to the Gauss-Markov sigma
- * the engine uses (ENGINE.md §3).
+ * the engine uses (docs/planar-model.md §3).
  *
  * Process: x' = −x/T + w, stationary variance σ², autocorrelation σ² e^{−|t|/T}.
- * With u = τ/T (REFERENCES.md §1.4, derived there and checked with sympy):
+ * With u = τ/T (docs/checks.md §1.4, derived there and checked with sympy):
  *   σ_A²(τ) = σ² (2u − 3 + 4e^{−u} − e^{−2u}) / u².
  */
 
@@ -18,7 +18,7 @@ const SERIES_LIMIT_U = 1;
  *
  * Series: expanding both exponentials, the numerator's terms of order 0, 1
  * and 2 cancel and σ_A²/σ² = Σ_{k≥3} (−1)^{k+1} (2^k − 4) u^{k−2} / k!
- * = 2u/3 − u²/2 + 7u³/30 − u⁴/12 + 31u⁵/1260 − … (REFERENCES.md §1.4
+ * = 2u/3 − u²/2 + 7u³/30 − u⁴/12 + 31u⁵/1260 − … (docs/checks.md §1.4
  * lists the first five terms; the general term is derived here).
  */
 function allanRatio(u: number): number {
@@ -46,7 +46,7 @@ function allanRatio(u: number): number {
 /**
  * u N'(u) − 2 N(u), with N the closed form's numerator: u³ times
  * d(σ_A²/σ²)/du, so it has the slope's sign. Expanded, it is
- * −2u + 6 − (4u + 8)e^{−u} + (2u + 2)e^{−2u} (REFERENCES.md §1.4).
+ * −2u + 6 − (4u + 8)e^{−u} + (2u + 2)e^{−2u} (docs/checks.md §1.4).
  */
 function slopeNumerator(u: number): number {
   return -2 * u + 6 - (4 * u + 8) * Math.exp(-u) + (2 * u + 2) * Math.exp(-2 * u);
@@ -100,7 +100,7 @@ export function gaussMarkovAllanVariance(sigma: number, correlationTimeS: number
 
 /**
  * The Gauss-Markov sigma whose Allan deviation peak equals a datasheet
- * bias-instability floor (ENGINE.md §3 convention): floor / GM_ALLAN_PEAK_RATIO.
+ * bias-instability floor (docs/planar-model.md §3 convention): floor / GM_ALLAN_PEAK_RATIO.
  *
  * @param floorSI Allan deviation floor in SI rate units (rad/s or m/s²), ≥ 0.
  * @returns Gauss-Markov sigma in the same unit.
@@ -115,7 +115,7 @@ export function gaussMarkovSigmaFromAllanFloor(floorSI: number): number {
 
 /**
  * The correlation time that puts the Gauss-Markov Allan peak at the cluster
- * time where a measured floor was read: τ_floor / GM_ALLAN_PEAK_U (ENGINE.md §3).
+ * time where a measured floor was read: τ_floor / GM_ALLAN_PEAK_U (docs/planar-model.md §3).
  *
  * @param tauFloorS cluster time of the floor in seconds, > 0.
  * @returns correlation time T in seconds.

@@ -3,6 +3,12 @@ import type { SourceInput } from '../inputs/budget-input';
 import type { ConversionStep } from '../covariance/error-model';
 import { readMagnitude, readPositive, type SourceKindSpec } from './source-kind';
 
+declare module '../inputs/budget-input' {
+  interface SourceKindMap {
+    multipath: true;
+  }
+}
+
 /** GNSS multipath allowance: Gauss-Markov states per axis, or folded into R. */
 export const multipathSpec: SourceKindSpec = {
   kind: 'multipath',
@@ -14,6 +20,13 @@ export const multipathSpec: SourceKindSpec = {
     { field: 'value', label: '1σ per axis', dimensions: ['length'], range: '>= 0', required: true },
     { field: 'correlationTime', label: 'correlation time (states only)', dimensions: ['time'], range: '> 0', required: false },
   ],
+  idBase: 'multipath',
+  option: {
+    field: 'multipathModel', label: 'multipath model',
+    choices: [{ value: 'states', label: 'states' }, { value: 'folded', label: 'folded' }],
+    fallback: () => 'states',
+  },
+  newRowOption: 'states',
 };
 
 /** Multipath in SI. */
@@ -28,7 +41,7 @@ export interface ResolvedMultipath {
 }
 
 /**
- * Resolves a multipath row (ENGINE.md §5).
+ * Resolves a multipath row (docs/planar-model.md §5).
  * @throws InputError for a negative sigma, or states without a positive correlation time.
  */
 export function resolveMultipath(row: SourceInput, path: string): ResolvedMultipath {

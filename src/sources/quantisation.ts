@@ -3,6 +3,12 @@ import type { ConversionStep } from '../covariance/error-model';
 import type { DimensionName } from '../units';
 import { readMagnitude, rowRateHz, type SourceKindSpec } from './source-kind';
 
+declare module '../inputs/budget-input' {
+  interface SourceKindMap {
+    quantisation: true;
+  }
+}
+
 /** Quantisation: the least significant bit of a reported rate or speed, or of an output angle increment. */
 export const quantisationSpec: SourceKindSpec = {
   kind: 'quantisation',
@@ -15,11 +21,12 @@ export const quantisationSpec: SourceKindSpec = {
     { field: 'value', label: 'LSB', dimensions: ['angular-rate', 'speed', 'angle'], range: '>= 0', required: true },
     { field: 'rate', label: 'output rate', dimensions: ['frequency'], range: '> 0', required: false },
   ],
+  idBase: 'lsb',
 };
 
 /** Quantisation in SI. */
 export interface ResolvedQuantisation {
-  /** Per-sample variance q²/12 (Widrow, Kollár & Liu 1996; REFERENCES.md §9). */
+  /** Per-sample variance q²/12 (Widrow, Kollár & Liu 1996; docs/checks.md §9). */
   perSampleVarianceSI: number;
   /** Two-sided PSD q²/(12 f_s) for a rate or speed LSB; 0 for an angle quantum. */
   psdSI: number;

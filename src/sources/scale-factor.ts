@@ -3,12 +3,19 @@ import type { SourceInput } from '../inputs/budget-input';
 import { resolveRandomConstant, type ResolvedRandomConstant } from './turn-on-bias';
 import type { SourceKindSpec } from './source-kind';
 
+declare module '../inputs/budget-input' {
+  interface SourceKindMap {
+    'scale-factor': true;
+  }
+}
+
 /** Scale factor error: a random constant ratio (ppm, %). */
 export const scaleFactorSpec: SourceKindSpec = {
   kind: 'scale-factor',
   label: 'scale factor',
   summary: 'A random constant scale-factor error (1σ) in ppm or %: the reading is (1 + s) times the truth.',
   parameters: [{ field: 'value', label: '1σ scale factor', dimensions: ['ratio'], range: '0 to 50 %', required: true }],
+  idBase: 'sf',
 };
 
 /**

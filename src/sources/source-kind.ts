@@ -15,6 +15,29 @@ export interface ParameterSpec {
   required: boolean;
 }
 
+/** The option fields a row can carry (one applies to a row at most; see {@link RowOptionSpec}). */
+export type OptionField = 'biasForm' | 'densitySides' | 'multipathModel' | 'component' | 'quantum';
+
+/** A model option of a row: its field, the choices in words, and the value meant when it is omitted. */
+export interface RowOptionSpec {
+  field: OptionField;
+  label: string;
+  choices: readonly { value: string; label: string }[];
+  /** The value meant when the field is omitted, given the dimension of the row's unit (undefined: unknown unit). */
+  fallback(unitDimension: DimensionName | undefined): string;
+  /** Whether the option applies to a row with this unit dimension and this value of the field (default: always). */
+  appliesTo?(unitDimension: DimensionName | undefined, current: string | undefined): boolean;
+}
+
+/** A cell a new row gets when nobody typed one, marked as assumed with a note saying so. */
+export interface AssumedCell {
+  field: 'correlationTime';
+  value: number;
+  unit: string;
+  /** Provenance text added to the row. */
+  note: string;
+}
+
 /** What every error-source model file exports. */
 export interface SourceKindSpec {
   kind: SourceKind;
@@ -22,6 +45,14 @@ export interface SourceKindSpec {
   /** One line for tooltips and docs. */
   summary: string;
   parameters: ParameterSpec[];
+  /** Id stem of a new row of this kind (`bi`, then `bi2`, ...). */
+  idBase: string;
+  /** The model option of this kind's rows, when it has one (a sensor may declare its own instead). */
+  option?: RowOptionSpec;
+  /** Value written into the option field of a new row, when the kind wants one written out. */
+  newRowOption?: string;
+  /** Required cells a new row gets filled in, marked as assumed. */
+  assumedCells?: readonly AssumedCell[];
 }
 
 /** Reads one quantity of a row, converts it to SI and records the conversion. */

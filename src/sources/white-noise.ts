@@ -3,6 +3,12 @@ import type { ConversionStep } from '../covariance/error-model';
 import { formatSignificant, type DimensionName } from '../units';
 import { pickDimension, readMagnitude, rowRateHz, type SourceKindSpec } from './source-kind';
 
+declare module '../inputs/budget-input' {
+  interface SourceKindMap {
+    'white-noise': true;
+  }
+}
+
 /** White noise: a random walk coefficient / noise density, or a per-sample sigma at an output rate. */
 export const whiteNoiseSpec: SourceKindSpec = {
   kind: 'white-noise',
@@ -14,6 +20,13 @@ export const whiteNoiseSpec: SourceKindSpec = {
     { field: 'value', label: 'magnitude', dimensions: ['angle-random-walk', 'angular-rate', 'length-random-walk', 'speed', 'length', 'angle'], range: '>= 0', required: true },
     { field: 'rate', label: 'output rate (per-sample sigma only)', dimensions: ['frequency'], range: '> 0', required: false },
   ],
+  idBase: 'noise',
+  option: {
+    field: 'densitySides', label: 'density sides',
+    choices: [{ value: 'two', label: 'two-sided' }, { value: 'one', label: 'one-sided' }],
+    fallback: () => 'two',
+    appliesTo: (dim, current) => dim === 'angle-random-walk' || dim === 'velocity-random-walk' || current !== undefined,
+  },
 };
 
 /** How a sensor accepts white noise: a density dimension (dead-reckoning inputs) and a per-sample one. */
@@ -36,7 +49,7 @@ export interface ResolvedWhiteNoise {
 /**
  * Resolves a white-noise row (IEEE Std 952 two-sided convention: a rate noise
  * of two-sided PSD N² has angle random walk N, and N = σ_d/√f_s for a
- * per-sample sigma σ_d at rate f_s; REFERENCES.md §2). A density marked
+ * per-sample sigma σ_d at rate f_s; docs/checks.md §2). A density marked
  * one-sided is divided by √2.
  * @throws InputError for a negative value or a unit of neither accepted dimension.
  */

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { computeBudget } from '../../src/pipeline';
 import { scenarioR1, scenarioR2 } from '../fixtures/reference-scenarios';
 
-// Acceptance values: ENGINE.md §11, "expected numbers from an independent reference"; agreement within 0.5 %.
+// Acceptance values: docs/planar-model.md §11, "expected numbers from an independent reference"; agreement within 0.5 %.
 const TOLERANCE = 0.005;
 const DEG = 180 / Math.PI;
 

@@ -45,7 +45,7 @@ describe('sigma-ledger allan', () => {
     const arw = json.terms.find((t: { name: string; method: string }) => t.name === 'angle random walk' && t.method === 'slope');
     expect(arw.unit).toBe('deg/√h');
     expect(arw.unitSI).toBe('rad/√s');
-    // The log was generated with N = 0.2 deg/√h; 3δ at τ = 1 s (REFERENCES.md §1.3) with N = 20 000, n = 100 is 15 %.
+    // The log was generated with N = 0.2 deg/√h; 3δ at τ = 1 s (docs/checks.md §1.3) with N = 20 000, n = 100 is 15 %.
     expect(Math.abs(arw.value / 0.2 - 1)).toBeLessThan(0.15);
   });
 

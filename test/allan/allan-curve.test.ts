@@ -23,8 +23,8 @@ describe('log-spaced cluster sizes', () => {
 });
 
 describe('the IEEE Std 952 percentage error', () => {
-  it('matches the values recorded in REFERENCES.md §1.3', () => {
-    // REFERENCES.md §1.3, computed: 7.106691 %, 23.570226 %, 0.707142 %.
+  it('matches the values recorded in docs/checks.md §1.3', () => {
+    // docs/checks.md §1.3, computed: 7.106691 %, 23.570226 %, 0.707142 %.
     expectRelative(allanPercentageError(100000, 1000), 0.0710669054518702, 1e-12);
     expectRelative(allanPercentageError(100000, 10000), 0.23570226, 1e-7);
     expectRelative(allanPercentageError(10000, 1), 0.00707142, 1e-5);
@@ -59,7 +59,7 @@ describe('the Allan deviation curve', () => {
   });
 
   it('from increments equals the θ form with θ₀ = 0 (L = N + 1)', () => {
-    // REFERENCES.md §1.2: the θ form equals the rate form only with θ₀ included.
+    // docs/checks.md §1.2: the θ form equals the rate form only with θ₀ included.
     const increments = rate.map((y) => y / 50);
     const curve = allanDeviationCurveFromIncrements(increments, 50, { clusterSizes: [1, 2, 5, 40] });
     const theta = anglesFromIncrements(increments);

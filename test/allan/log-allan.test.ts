@@ -35,7 +35,7 @@ describe('analysing a log column', () => {
       ['rate ramp', 'deg/h²', 'rad/s²'],
     ]);
     for (const t of slope) expectRelative(t.value, convert(t.valueSI, t.unitSI, t.unit, 'test'), 1e-15);
-    // 1 rad/√s = 3437.746770784939 deg/√h (REFERENCES.md §2).
+    // 1 rad/√s = 3437.746770784939 deg/√h (docs/checks.md §2).
     const arw = slope[1];
     expectRelative(arw.value, arw.valueSI * 3437.746770784939, 1e-12);
   });

@@ -8,7 +8,7 @@ import { expectAbsolute, expectRelative } from './expect-close';
 
 describe('the IEEE Std 952 noise terms', () => {
   it('give exactly their coefficient at their read-off τ when the coefficient is 1', () => {
-    // REFERENCES.md §1.1 unit-test idea: σ(√3) = Q, σ(1) = N, σ(3) = K, σ(√2) = R (IEEE Std 952-1997 Annex C, from memory).
+    // docs/checks.md §1.1 unit-test idea: σ(√3) = Q, σ(1) = N, σ(3) = K, σ(√2) = R (IEEE Std 952-1997 Annex C, from memory).
     for (const term of NOISE_TERMS) {
       if (term.readOffTauS === undefined) continue;
       expectRelative(termDeviation(term.id, 1, term.readOffTauS), 1, 2e-16);
@@ -17,13 +17,13 @@ describe('the IEEE Std 952 noise terms', () => {
   });
 
   it('put the bias-instability floor at 0.6642824702679601 B', () => {
-    // REFERENCES.md §1.1, computed: √(2 ln 2/π).
+    // docs/checks.md §1.1, computed: √(2 ln 2/π).
     expectRelative(termDeviation('bias-instability', 1, 123), 0.6642824702679601, 1e-15);
     expectRelative(FLICKER_FLOOR_FACTOR, 0.6642824702679601, 1e-15);
   });
 
   it('have log-log slopes of −1, −½, 0, +½ and +1 over two decades', () => {
-    // REFERENCES.md §1.1 unit-test idea: fitted slopes of closed-form curves, ±1e-12.
+    // docs/checks.md §1.1 unit-test idea: fitted slopes of closed-form curves, ±1e-12.
     const tau = logTaus(-1, 1);
     for (const term of NOISE_TERMS) {
       const slopes = localLogLogSlopes(curveFromVariance(tau, (t) => term.unitVariance(t)));
@@ -32,7 +32,7 @@ describe('the IEEE Std 952 noise terms', () => {
   });
 
   it('reproduce the trade-unit example table in deg/h', () => {
-    // REFERENCES.md §1.1 (computed): N = 0.1 °/√h, K = 0.5 °/h/√h, R = 10 °/h², Q = 1 arcsec; σ in °/h at 1, 100, 3600, 10800 s.
+    // docs/checks.md §1.1 (computed): N = 0.1 °/√h, K = 0.5 °/h/√h, R = 10 °/h², Q = 1 arcsec; σ in °/h at 1, 100, 3600, 10800 s.
     const n = toSI(0.1, 'deg/√h', 'angle-random-walk', 'N');
     const k = toSI(0.5, 'deg/h/√h', 'rate-random-walk', 'K');
     const r = toSI(10, 'deg/h²', 'angular-acceleration', 'R');
@@ -54,7 +54,7 @@ describe('the IEEE Std 952 noise terms', () => {
   });
 
   it('read N in deg/√h as σ at 1 h in deg/h, and K in deg/h/√h as σ at 3 h', () => {
-    // REFERENCES.md §1.1: "in trade units N [°/√h] = σ(τ = 1 h) in °/h; K [°/h/√h] = σ(τ = 3 h) in °/h".
+    // docs/checks.md §1.1: "in trade units N [°/√h] = σ(τ = 1 h) in °/h; K [°/h/√h] = σ(τ = 3 h) in °/h".
     const n = toSI(0.1, 'deg/√h', 'angle-random-walk', 'N');
     const k = toSI(0.5, 'deg/h/√h', 'rate-random-walk', 'K');
     expectRelative(fromSI(termDeviation('random-walk', n, 3600), 'deg/h', 'angular-rate', 'σ'), 0.1, 1e-12);

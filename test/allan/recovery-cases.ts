@@ -75,7 +75,7 @@ export function gaussMarkovCase(seed: number) {
   };
 }
 
-/** Angle quantisation s = 1e-3 with independent uniform errors (REFERENCES.md §1.5). */
+/** Angle quantisation s = 1e-3 with independent uniform errors (docs/checks.md §1.5). */
 export function quantisationCase(seed: number) {
   const quantum = 1e-3;
   const curve = allanDeviationCurve(syntheticRateLog({ rateHz: RATE_HZ, sampleCount: SAMPLES, seed, angleQuantum: quantum }), RATE_HZ);

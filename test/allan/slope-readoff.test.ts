@@ -9,7 +9,7 @@ import { expectAbsolute, expectRelative } from './expect-close';
 
 describe('slope read-offs on noise-free curves', () => {
   it('return exactly the coefficient of a single-term curve, read inside the data', () => {
-    // A pure power law is its own line: the read-off is exact (IEEE Std 952-1997 Annex C read-off points, REFERENCES.md §1.1).
+    // A pure power law is its own line: the read-off is exact (IEEE Std 952-1997 Annex C read-off points, docs/checks.md §1.1).
     const tau = logTaus(-2, 2);
     for (const term of NOISE_TERMS.filter((t) => t.readOffTauS !== undefined)) {
       const reading = readTermBySlope(curveFromVariance(tau, termsVariance({ [term.id]: 2.5e-3 })), term.id);
@@ -28,7 +28,7 @@ describe('slope read-offs on noise-free curves', () => {
   });
 
   it('separate angle random walk and rate random walk three decades apart', () => {
-    // N = 1e-3, K = 1e-6 cross at τ = √3 N/K ≈ 1732 s (REFERENCES.md §1.1 closed forms); each read-off must stay within its own
+    // N = 1e-3, K = 1e-6 cross at τ = √3 N/K ≈ 1732 s (docs/checks.md §1.1 closed forms); each read-off must stay within its own
     // reported uncertainty, which bounds the neighbour's share by the local slope's distance from the term's slope.
     const curve = curveFromVariance(logTaus(-2, 7), termsVariance({ 'random-walk': 1e-3, 'rate-random-walk': 1e-6 }));
     for (const [id, truth] of [['random-walk', 1e-3], ['rate-random-walk', 1e-6]] as const) {
@@ -60,7 +60,7 @@ describe('slope read-offs on noise-free curves', () => {
 
 describe('the bias-instability floor', () => {
   it('reads B from a flat floor between white noise and rate random walk', () => {
-    // B = floor / 0.664282 (IEEE Std 952-1997 Annex C via REFERENCES.md §1.1); N = 1e-4, B = 1e-3, K = 1e-7 leave the
+    // B = floor / 0.664282 (IEEE Std 952-1997 Annex C via docs/checks.md §1.1); N = 1e-4, B = 1e-3, K = 1e-7 leave the
     // floor within 1e-4 of 0.664 B for two decades around τ = √3 N/K ≈ 1732 s (closed forms, computed here).
     const curve = curveFromVariance(logTaus(-2, 7), termsVariance({ 'random-walk': 1e-4, 'bias-instability': 1e-3, 'rate-random-walk': 1e-7 }));
     const reading = readBiasInstabilityFloor(curve);
@@ -70,7 +70,7 @@ describe('the bias-instability floor', () => {
   });
 
   it('finds the peak of a Gauss-Markov bias at 1.8926 T with the peak deviation 0.6174 σ', () => {
-    // REFERENCES.md §1.4: peak at u* = 1.892617832925019, σ_A,max = 0.6173642831444414 σ. The floor reader interpolates the
+    // docs/checks.md §1.4: peak at u* = 1.892617832925019, σ_A,max = 0.6173642831444414 σ. The floor reader interpolates the
     // zero crossing of a ±¼-decade slope on a skewed peak and averages ±¼ decade; its own bias, computed here, is below 1 %.
     const sigma = 2e-3, correlationTimeS = 40;
     const curve = curveFromVariance(logTaus(-1, 4), (t) => gaussMarkovAllanVariance(sigma, correlationTimeS, t) + 1e-12 / t);
@@ -89,7 +89,7 @@ describe('the Gauss-Markov small-τ and large-τ cases', () => {
   const sigma = 1, correlationTimeS = 1;
 
   it('look like rate random walk K² = 2σ²/T for τ ≪ T, read through gaussMarkovAllanVariance without cancellation', () => {
-    // REFERENCES.md §1.4: σ_A² → (2/3)σ² τ/T for small τ, the closed form cancels catastrophically in doubles at u = 1e-6
+    // docs/checks.md §1.4: σ_A² → (2/3)σ² τ/T for small τ, the closed form cancels catastrophically in doubles at u = 1e-6
     // (wrong sign), and the ratio to the asymptote is 1 − 7.5e-4 at u = 1e-3, so below 1e-4 in σ for u ≤ 1e-4.
     const curve = curveFromVariance(logTaus(-7, -4), (t) => gaussMarkovAllanVariance(sigma, correlationTimeS, t));
     for (const s of localLogLogSlopes(curve)) expectAbsolute(s, 0.5, 1e-4);
@@ -99,7 +99,7 @@ describe('the Gauss-Markov small-τ and large-τ cases', () => {
   });
 
   it('look like white rate noise N² = 2σ²T for τ ≫ T', () => {
-    // REFERENCES.md §1.4: σ_A² → 2σ²T/τ; the ratio to it is 1 − 1.5e-3 at u = 1e3, so below 1e-4 in σ from u = 1e4.
+    // docs/checks.md §1.4: σ_A² → 2σ²T/τ; the ratio to it is 1 − 1.5e-3 at u = 1e3, so below 1e-4 in σ from u = 1e4.
     const curve = curveFromVariance(logTaus(4, 7), (t) => gaussMarkovAllanVariance(sigma, correlationTimeS, t));
     const reading = readTermBySlope(curve, 'random-walk');
     expectRelative(reading.coefficient, Math.sqrt(2 * sigma * sigma * correlationTimeS), 1e-4);

@@ -3,15 +3,15 @@
  * benchmark. Not a test file itself.
  *
  * - white rate noise of random-walk coefficient N: independent samples of
- *   σ_d = N·√f_s (REFERENCES.md §2: N = σ_d/√f_s);
+ *   σ_d = N·√f_s (docs/checks.md §2: N = σ_d/√f_s);
  * - rate random walk K: b_{k+1} = b_k + K·√τ₀·w_k (the integral of white
  *   noise of PSD K² over one sample);
  * - first-order Gauss-Markov bias (σ, T): x_{k+1} = φx_k + σ√(1 − φ²)·w_k,
  *   φ = e^{−τ₀/T}, started in its stationary distribution (exact
- *   discretisation, REFERENCES.md §3.2 (c));
+ *   discretisation, docs/checks.md §3.2 (c));
  * - angle quantum s: the angle at each sample carries an independent error
  *   uniform on (−s/2, s/2) (the busy-input model of Widrow, Kollár & Liu,
- *   IEEE Trans. Instrum. Meas. 45(2), 1996, as REFERENCES.md §1.5 simulates it).
+ *   IEEE Trans. Instrum. Meas. 45(2), 1996, as docs/checks.md §1.5 simulates it).
  * All in SI-consistent units (rad/s, rad/√s, rad/s/√s, rad).
  */
 import { SeededRandom } from './seeded-random';

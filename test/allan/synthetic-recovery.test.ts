@@ -2,7 +2,7 @@
  * Noise terms recovered from seeded synthetic logs (synthetic-log.ts).
  *
  * Tolerances come from the IEEE Std 952 percentage error δ = 1/√(2(N/n − 1))
- * (REFERENCES.md §1.3), which understates the real scatter by about 20 %, so
+ * (docs/checks.md §1.3), which understates the real scatter by about 20 %, so
  * three times it is about 2.5 real standard deviations:
  * - a value read at a cluster size where its term dominates: 3δ there;
  * - a slope read-off: 3 × its reported uncertainty (the best point's
@@ -35,7 +35,7 @@ describe('noise terms recovered from seeded synthetic logs', () => {
   });
 
   it('write the recovered Gauss-Markov bias as a floor row with T_bi = τ_floor / GM_ALLAN_PEAK_U', () => {
-    // ENGINE.md §3: a value fitted from a log is written as the floor (kind "floor") with T_bi = τ_floor / 1.8926.
+    // docs/planar-model.md §3: a value fitted from a log is written as the floor (kind "floor") with T_bi = τ_floor / 1.8926.
     const { curve, floor } = gaussMarkovCase(12);
     const row = analyseAllanCurve(curve, 'gyro').biasInstability!;
     expect(row.kind).toBe('floor');
@@ -48,7 +48,7 @@ describe('noise terms recovered from seeded synthetic logs', () => {
   });
 
   it('recover the quantisation coefficient Q = s/√12 and σ(τ) = s/(2τ)', () => {
-    // REFERENCES.md §1.5: Q = s/√12 (IEEE Std 952 Annex C, from memory), ADEV 5.000e-2 / 5.000e-3 / 5.000e-4 at τ = 0.01 / 0.1 / 1 s.
+    // docs/checks.md §1.5: Q = s/√12 (IEEE Std 952 Annex C, from memory), ADEV 5.000e-2 / 5.000e-3 / 5.000e-4 at τ = 0.01 / 0.1 / 1 s.
     const { checks } = quantisationCase(13);
     expect(checks).toEqual([true, true, true, true, true]);
   });

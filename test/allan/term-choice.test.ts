@@ -44,7 +44,7 @@ describe('which Allan reading a grid row takes', () => {
     const byFit = allanCandidates({ result, rateHz: 100 }, 'fit', 'yaw-gyro', source).find((c) => c.id === 'rate-random-walk')!;
     expect(byFit.note).toBeUndefined();
     expect(byFit.plan!.fields.value).toBe(rrw.plan!.fields.value);
-    // The generated K = 30 deg/h/√h; the fit's value within 3 of its standard errors plus 20 % (REFERENCES.md §1.3: δ understates).
+    // The generated K = 30 deg/h/√h; the fit's value within 3 of its standard errors plus 20 % (docs/checks.md §1.3: δ understates).
     expect(Math.abs(fitRrw.value - 30)).toBeLessThan(3 * fitRrw.uncertainty + 6);
   });
 

@@ -30,7 +30,7 @@ describe('non-negative least squares by support enumeration', () => {
 
 describe('the whole-curve fit', () => {
   it('recovers all five coefficients from a noise-free sum of the terms', () => {
-    // The model is linear in the squared coefficients, so exact data give them back (IEEE Std 952 term shapes, REFERENCES.md §1.1).
+    // The model is linear in the squared coefficients, so exact data give them back (IEEE Std 952 term shapes, docs/checks.md §1.1).
     const truth = { 'quantisation': 1e-5, 'random-walk': 1e-3, 'bias-instability': 2e-4, 'rate-random-walk': 1e-6, 'rate-ramp': 1e-9 };
     const fit = fitNoiseTerms(curveFromVariance(logTaus(-2, 6), termsVariance(truth)));
     for (const term of fit.terms) {

@@ -1,6 +1,6 @@
 /**
  * `npx tsx test/bench/allan-bench.ts`: speed of the sensor-log path for 10
- * million samples, parse and compute reported separately (TOOLCHAIN.md:
+ * million samples, parse and compute reported separately (DEVELOPERS.md:
  * papaparse reads 10 million rows in about 6 s; an overlapping Allan
  * deviation at 63 cluster times took 1.7 s). Medians of a few runs; the
  * machines are noisy, so speed targets live here, never in a timed test.

@@ -14,7 +14,7 @@ const { jStat } = require('jstat') as {
 
 describe('confidenceFactor1D', () => {
   it('gives 1, 2 and 1.959963984540054 for 1 sigma, 2 sigma and 95 %', () => {
-    // ENGINE.md §8 levels; z(0.975) = 1.959963984540054 computed with scipy.stats.norm.ppf (REFERENCES.md §6 χ² table, √3.8414588207).
+    // docs/planar-model.md §8 levels; z(0.975) = 1.959963984540054 computed with scipy.stats.norm.ppf (docs/checks.md §6 χ² table, √3.8414588207).
     expect(confidenceFactor1D('1sigma')).toBe(1);
     expect(confidenceFactor1D('2sigma')).toBe(2);
     expect(Math.abs(confidenceFactor1D('95%') - 1.959963984540054)).toBeLessThan(1e-15);
@@ -29,7 +29,7 @@ describe('confidenceFactor1D', () => {
 
 describe('normalQuantile', () => {
   it('reproduces the tabulated normal quantiles', () => {
-    // REFERENCES.md §6 χ² table, df = 1 square roots (computed with scipy.stats.chi2.ppf); 10 decimals.
+    // docs/checks.md §6 χ² table, df = 1 square roots (computed with scipy.stats.chi2.ppf); 10 decimals.
     expect(Math.abs(normalQuantile(0.75) - 0.6744897502)).toBeLessThan(1e-10);
     expect(Math.abs(normalQuantile(0.975) - 1.9599639845)).toBeLessThan(1e-10);
     expect(Math.abs(normalQuantile(0.995) - 2.5758293035)).toBeLessThan(1e-10);

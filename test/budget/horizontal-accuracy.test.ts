@@ -35,7 +35,7 @@ function probabilityByConditioning(a: number, b: number, r: number): number {
 
 describe('radiusForProbability', () => {
   it('gives the Rayleigh factors CEP 1.1774100225, R95 2.4477468307 and R99 3.0348542588 for a circular error', () => {
-    // REFERENCES.md §6, circular case r_p = σ√(−2 ln(1 − p)) (computed with scipy); tolerance 1e-10.
+    // docs/checks.md §6, circular case r_p = σ√(−2 ln(1 − p)) (computed with scipy); tolerance 1e-10.
     expect(Math.abs(cep(1, 1) - Math.sqrt(2 * Math.LN2))).toBeLessThan(1e-10);
     expect(Math.abs(cep(1, 1) - 1.1774100225)).toBeLessThan(1e-10);
     expect(Math.abs(r95(1, 1) - 2.4477468307)).toBeLessThan(1e-10);
@@ -45,7 +45,7 @@ describe('radiusForProbability', () => {
   });
 
   it('reproduces the exact elliptical CEP and R95 table for axis ratios 1 to 0', () => {
-    // REFERENCES.md §6 elliptical table, σ_x = 1 (computed with scipy quadrature + brentq); tolerance 1e-8.
+    // docs/checks.md §6 elliptical table, σ_x = 1 (computed with scipy quadrature + brentq); tolerance 1e-8.
     const table: Array<[ratio: number, cep: number, r95: number]> = [
       [1, 1.17741002, 2.44774683],
       [0.5, 0.87041743, 2.03585872],
@@ -63,13 +63,13 @@ describe('radiusForProbability', () => {
   });
 
   it('gives CEP 2.9263950342 and R95 6.3665197992 for σx = 3 m, σy = 2 m', () => {
-    // REFERENCES.md §6 worked example (computed with scipy); tolerance 1e-9 m.
+    // docs/checks.md §6 worked example (computed with scipy); tolerance 1e-9 m.
     expect(Math.abs(cep(9, 4) - 2.9263950342)).toBeLessThan(1e-9);
     expect(Math.abs(r95(9, 4) - 6.3665197992)).toBeLessThan(1e-9);
   });
 
   it('uses the eigenvalues of a correlated covariance', () => {
-    // REFERENCES.md §6: P = [[4, 1.5],[1.5, 2]] → λ = 4.80277564, 1.19722436, CEP 1.9065381253 (computed with scipy).
+    // docs/checks.md §6: P = [[4, 1.5],[1.5, 2]] → λ = 4.80277564, 1.19722436, CEP 1.9065381253 (computed with scipy).
     const { major, minor } = principalVariances(4, 2, 1.5);
     expect(Math.abs(major - 4.80277564)).toBeLessThan(1e-8);
     expect(Math.abs(minor - 1.19722436)).toBeLessThan(1e-8);
@@ -86,11 +86,11 @@ describe('radiusForProbability', () => {
   });
 
   it('returns the 1-D two-sided quantile for a rank-one covariance', () => {
-    // REFERENCES.md §6 (→0 row) and the jstat reference: √(jStat.chisquare.inv(0.95, 1)) = 1.959964.
+    // docs/checks.md §6 (→0 row) and the jstat reference: √(jStat.chisquare.inv(0.95, 1)) = 1.959964.
     expect(Math.abs(r95(4, 0) / 2 - Math.sqrt(jStat.chisquare.inv(0.95, 1)))).toBeLessThan(1e-10);
     // z(0.975) = 1.959963984540054 computed with scipy 1.17, scipy.stats.norm.ppf(0.975).
     expect(Math.abs(r95(4, 0) / 2 - 1.959963984540054)).toBeLessThan(1e-15);
-    // Rank one along a diagonal direction: [[1, 1],[1, 1]] has major variance 2; z(0.75) = 0.6744897502 (REFERENCES.md §6 χ² table).
+    // Rank one along a diagonal direction: [[1, 1],[1, 1]] has major variance 2; z(0.75) = 0.6744897502 (docs/checks.md §6 χ² table).
     expect(Math.abs(cep(1, 1, 1) - cep(2, 0))).toBeLessThan(1e-14);
     expect(Math.abs(cep(1, 1, 1) - Math.SQRT2 * 0.6744897502)).toBeLessThan(1e-10);
   });
@@ -162,7 +162,7 @@ describe('radiusForProbability', () => {
 
 describe('probabilityInsideCircle', () => {
   it('gives P(inside DRMS) and P(inside 2DRMS) as tabulated for axis ratios 1 to 0', () => {
-    // REFERENCES.md §6 elliptical table, P(<DRMS) and P(<2DRMS) columns (computed with scipy), 6 decimals.
+    // docs/checks.md §6 elliptical table, P(<DRMS) and P(<2DRMS) columns (computed with scipy), 6 decimals.
     const table: Array<[ratio: number, drms: number, twoDrms: number]> = [
       [1, 0.632121, 0.981684],
       [0.5, 0.662975, 0.969843],
@@ -179,7 +179,7 @@ describe('probabilityInsideCircle', () => {
   });
 
   it('is 1 − e⁻¹ inside DRMS and 1 − e⁻⁴ inside 2DRMS for a circular error', () => {
-    // REFERENCES.md §6 circular table (Rayleigh distribution); to 1e-14.
+    // docs/checks.md §6 circular table (Rayleigh distribution); to 1e-14.
     expect(Math.abs(probabilityInsideCircle(2, 2, 2) - (1 - Math.exp(-1)))).toBeLessThan(1e-14);
     expect(Math.abs(probabilityInsideCircle(2, 2, 4) - (1 - Math.exp(-4)))).toBeLessThan(1e-14);
   });

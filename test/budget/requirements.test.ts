@@ -6,7 +6,7 @@ import { budget, gyro, q, straightMission, wheel } from '../fixtures/small-budge
 
 const DEG = Math.PI / 180;
 
-/** A compass that is out for the whole mission: heading then grows as N √t from ARW alone (REFERENCES.md §4.1). */
+/** A compass that is out for the whole mission: heading then grows as N √t from ARW alone (docs/checks.md §4.1). */
 function arwOnlyWithCompassOut(durationS: number, requirement: RequirementInput) {
   const compass: SensorInput = {
     id: 'compass', kind: 'compass', rate: q(1, 'Hz'),
@@ -18,7 +18,7 @@ function arwOnlyWithCompassOut(durationS: number, requirement: RequirementInput)
 }
 
 describe('time to exceed during an outage', () => {
-  it('equals (L / N)² for heading that grows as N √t (closed form, REFERENCES.md §4.1)', () => {
+  it('equals (L / N)² for heading that grows as N √t (closed form, docs/checks.md §4.1)', () => {
     // N = 0.5 deg/√h = 0.5/60 deg/√s; L = 0.1 deg -> t = (0.1 / (0.5/60))² = 144 s.
     const r = arwOnlyWithCompassOut(300, { id: 'heading', quantity: 'heading', level: '1sigma', limit: q(0.1, 'deg') });
     const hold = r.requirements[0].outages[0];
@@ -72,7 +72,7 @@ describe('timeToExceed', () => {
 });
 
 describe('horizontal levels', () => {
-  it('uses DRMS for 1 sigma and the exact R95 for 95 % (circular case: 2.4477468307 sigma, REFERENCES.md §6)', () => {
+  it('uses DRMS for 1 sigma and the exact R95 for 95 % (circular case: 2.4477468307 sigma, docs/checks.md §6)', () => {
     const mission = straightMission(1, 0, { positionM: 2, headingDeg: 0 });
     const reqs: RequirementInput[] = [
       { id: 'drms', quantity: 'horizontal', level: '1sigma', limit: q(100, 'm') },

@@ -3,7 +3,7 @@ import { sizeSource } from '../../src/budget/sizing';
 import { SigmaLedgerError } from '../../src/errors';
 import { budget, gyro, q, straightMission, wheel } from '../fixtures/small-budgets';
 
-// Heading from ARW alone is N √t (REFERENCES.md §4.1), so the largest ARW holding heading <= L over T is L / √T.
+// Heading from ARW alone is N √t (docs/checks.md §4.1), so the largest ARW holding heading <= L over T is L / √T.
 function arwBudget(arwDegRtH: number) {
   return budget(straightMission(400, 1), [gyro([{ id: 'arw', kind: 'white-noise', value: q(arwDegRtH, 'deg/√h') }]), wheel()], 1, {
     requirements: [{ id: 'heading', quantity: 'heading', level: '1sigma', limit: q(0.1, 'deg') }],
@@ -36,7 +36,7 @@ describe('sizing by bisection', () => {
     expect(r.outcome).toBe('always-passes');
   });
 
-  it('sizes a constant bias against the closed form b t (REFERENCES.md §4.2)', () => {
+  it('sizes a constant bias against the closed form b t (docs/checks.md §4.2)', () => {
     const b = budget(straightMission(400, 1), [gyro([{ id: 'bias', kind: 'turn-on-bias', value: q(1, 'deg/h') }]), wheel()], 1, {
       requirements: [{ id: 'heading', quantity: 'heading', level: '1sigma', limit: q(1, 'deg') }],
     });

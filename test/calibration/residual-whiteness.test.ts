@@ -11,8 +11,8 @@ const require = createRequire(import.meta.url);
 const { jStat } = require('jstat') as { jStat: { chisquare: { cdf(x: number, dof: number): number } } };
 
 describe('the χ² upper tail', () => {
-  it('puts 50 %, 5 % and 1 % above the quantiles recorded in REFERENCES.md §6', () => {
-    // REFERENCES.md §6, scipy.stats.chi2.ppf (computed): df 1, 2, 3 at 50 %, 95 %, 99 %.
+  it('puts 50 %, 5 % and 1 % above the quantiles recorded in docs/checks.md §6', () => {
+    // docs/checks.md §6, scipy.stats.chi2.ppf (computed): df 1, 2, 3 at 50 %, 95 %, 99 %.
     const quantiles: [number, number, number, number][] = [
       [1, 0.4549364231, 3.8414588207, 6.634896601],
       [2, 1.3862943611, 5.9914645471, 9.210340372],

@@ -18,7 +18,7 @@ function workspace(logLines: string[]) {
 
 describe('writing a log\'s results into a budget from the command line', () => {
   it('allan --into writes the angle random walk into the gyro with its origin as provenance', async () => {
-    // White rate noise of 0.05 deg/s per sample at 100 Hz: N = σ/√f = 0.005 deg/√s = 0.3 deg/√h (IEEE Std 952 convention, REFERENCES.md §2).
+    // White rate noise of 0.05 deg/s per sample at 100 Hz: N = σ/√f = 0.005 deg/√s = 0.3 deg/√h (IEEE Std 952 convention, docs/checks.md §2).
     const random = new SeededRandom(5);
     const lines = ['t,rate'];
     for (let k = 0; k < 40000; k++) lines.push(`${(k / 100).toFixed(2)},${(0.05 * random.normal()).toFixed(6)}`);

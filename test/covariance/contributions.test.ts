@@ -3,7 +3,7 @@ import { computeBudget } from '../../src/pipeline';
 import { checkCovariance } from '../../src/covariance/covariance-health';
 import { scenarioR1, scenarioR2 } from '../fixtures/reference-scenarios';
 
-// ENGINE.md §7 (Gelb, Applied Optimal Estimation, 1974, sec. 7.3): with the gains fixed from the full run,
+// docs/planar-model.md §7 (Gelb, Applied Optimal Estimation, 1974, sec. 7.3): with the gains fixed from the full run,
 // the recursion is linear in (P0, Q, R), so per-source covariances sum to the total.
 describe.each([['R1', scenarioR1], ['R2', scenarioR2]])('per-source contributions of %s', (_name, scenario) => {
   const result = computeBudget(scenario());

@@ -8,7 +8,7 @@ function gnss(sigmaM: number, rateHz = 1, extra: Partial<SensorInput> = {}): Sen
 }
 
 describe('GNSS fixes of a static position', () => {
-  // Repeated independent fixes of a constant: sigma0² sigma² / (sigma² + k sigma0²) (REFERENCES.md §5, least squares of k fixes with a prior).
+  // Repeated independent fixes of a constant: sigma0² sigma² / (sigma² + k sigma0²) (docs/checks.md §5, least squares of k fixes with a prior).
   it('shrink the variance as sigma0² sigma² / (sigma² + k sigma0²) after k fixes', () => {
     const r = computeBudget(budget(straightMission(10, 0, { positionM: 3, headingDeg: 0 }), [gyro([]), wheel(), gnss(1.5)], 1));
     const north = r.series.quantities.north!.total;
@@ -19,7 +19,7 @@ describe('GNSS fixes of a static position', () => {
   });
 
   it('split between prior and fix as worked by hand (sigma0 = 2 m, sigma = 1 m: 0.16 + 0.64 = 0.8 m²)', () => {
-    // Gain K = 4/5; prior share (1 - K)² 4 = 0.16; fix share K² 1 = 0.64 (ENGINE.md §7, fixed-gain recursion).
+    // Gain K = 4/5; prior share (1 - K)² 4 = 0.16; fix share K² 1 = 0.64 (docs/planar-model.md §7, fixed-gain recursion).
     const r = computeBudget(budget(straightMission(1, 0, { positionM: 2, headingDeg: 0 }), [gyro([]), wheel(), gnss(1)], 1));
     const north = r.series.quantities.north!;
     const share = (id: string) => north.bySource[r.model.sources.findIndex((s) => s.id === id)][0];
@@ -30,7 +30,7 @@ describe('GNSS fixes of a static position', () => {
 });
 
 describe('steady state of a random walk observed in white noise', () => {
-  // Scalar discrete Riccati equation, P- = (Q + √(Q² + 4QR))/2, P+ = P- - Q (REFERENCES.md §5.1;
+  // Scalar discrete Riccati equation, P- = (Q + √(Q² + 4QR))/2, P+ = P- - Q (docs/checks.md §5.1;
   // Brown & Hwang, Introduction to Random Signals and Applied Kalman Filtering, from memory).
   // Along-track driven by speed noise of PSD σ²/f_s over a 1 s step is exactly such a walk.
   const cases: [number, number, number][] = [
@@ -49,7 +49,7 @@ describe('steady state of a random walk observed in white noise', () => {
 });
 
 describe('measurement timing and outages', () => {
-  it('takes a fix at the outage end but not at its start (half-open windows, ENGINE.md §5)', () => {
+  it('takes a fix at the outage end but not at its start (half-open windows, docs/planar-model.md §5)', () => {
     const sensors = [gyro([]), wheel(), gnss(1, 1, { outages: [{ start: q(2, 's'), end: q(5, 's') }] })];
     const r = computeBudget(budget(straightMission(8, 0, { positionM: 10, headingDeg: 0 }), sensors, 1));
     expect(r.history.measurementCounts.gnss).toBe(2 * 6); // t = 0, 1, 5, 6, 7, 8, north and east each

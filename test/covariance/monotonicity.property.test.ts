@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import { computeBudget } from '../../src/pipeline';
 import type { BudgetInput, SensorInput, SourceInput } from '../../src/inputs/budget-input';
 
-// ENGINE.md §9: for an optimal filter the covariance never decreases when a noise magnitude grows
+// docs/planar-model.md §9: for an optimal filter the covariance never decreases when a noise magnitude grows
 // (the Riccati map is monotone in P0, Q and R; Anderson & Moore, Optimal Filtering, 1979, from memory),
 // to round-off: 1e-12 relative is allowed there.
 const q = (value: number, unit: string) => ({ value, unit });

@@ -36,7 +36,7 @@ function expectSymmetricPsd(qd: Float64Array, n: number): void {
 describe('discretiseVanLoan', () => {
   it('reproduces the continuous white-noise-acceleration Q_d for T = 0.1 s, q = 0.01', () => {
     // Bar-Shalom, Li & Kirubarajan 2001, §6.2.2: Q_d = q[[T³/3, T²/2],[T²/2, T]], Φ = [[1, T],[0, 1]];
-    // values as recorded in REFERENCES.md §3.2(a).
+    // values as recorded in docs/checks.md §3.2(a).
     const t = 0.1;
     const q = 0.01;
     const { phi, qd } = discretiseVanLoan(rowMajor([[0, 1], [0, 0]]), diagonal([0, q]), 2, t);
@@ -47,7 +47,7 @@ describe('discretiseVanLoan', () => {
   });
 
   it('reproduces the continuous white-noise-acceleration Q_d for T = 1 s, q = 1', () => {
-    // Bar-Shalom, Li & Kirubarajan 2001, §6.2.2; REFERENCES.md §3.2(a): [[1/3, 1/2],[1/2, 1]].
+    // Bar-Shalom, Li & Kirubarajan 2001, §6.2.2; docs/checks.md §3.2(a): [[1/3, 1/2],[1/2, 1]].
     const { phi, qd } = discretiseVanLoan(rowMajor([[0, 1], [0, 0]]), diagonal([0, 1]), 2, 1);
     expectRelative(phi, [[1, 1], [0, 1]], 1e-12);
     expectRelative(qd, [[1 / 3, 1 / 2], [1 / 2, 1]], 1e-12);
@@ -55,7 +55,7 @@ describe('discretiseVanLoan', () => {
 
   it('reproduces the continuous white-noise-jerk (three-state) Q_d', () => {
     // Bar-Shalom, Li & Kirubarajan 2001, §6.2.3: Q_d = q[[T⁵/20, T⁴/8, T³/6],[T⁴/8, T³/3, T²/2],[T³/6, T²/2, T]];
-    // REFERENCES.md §3.2(b), T = 0.1 s, q = 0.01.
+    // docs/checks.md §3.2(b), T = 0.1 s, q = 0.01.
     const t = 0.1;
     const q = 0.01;
     const f = rowMajor([[0, 1, 0], [0, 0, 1], [0, 0, 0]]);
@@ -71,7 +71,7 @@ describe('discretiseVanLoan', () => {
   });
 
   it('gives φ = e^(−T/τ) and Q_d = σ²(1 − φ²) for a scalar Gauss-Markov process', () => {
-    // Closed form and values: REFERENCES.md §3.2(c) (computed with scipy.linalg.expm).
+    // Closed form and values: docs/checks.md §3.2(c) (computed with scipy.linalg.expm).
     const cases = [
       { sigma: 0.5, tauS: 100, dtS: 1, phi: 9.900498337492e-1, qd: 4.950331673311e-3 },
       { sigma: 1, tauS: 20, dtS: 1, phi: 9.512294245007e-1, qd: 9.516258196404e-2 },
@@ -87,7 +87,7 @@ describe('discretiseVanLoan', () => {
   });
 
   it('reproduces the Singer manoeuvre model for two step lengths', () => {
-    // Singer, IEEE Trans. AES-6(4), 1970 (from memory); values REFERENCES.md §3.2(d), computed with scipy.linalg.expm.
+    // Singer, IEEE Trans. AES-6(4), 1970 (from memory); values docs/checks.md §3.2(d), computed with scipy.linalg.expm.
     const singer = (tauS: number) => rowMajor([[0, 1, 0], [0, 0, 1], [0, 0, -1 / tauS]]);
     const first = discretiseVanLoan(singer(20), diagonal([0, 0, 2 / 20]), 3, 1);
     expectRelative(first.phi, [[1, 1, 4.917698002856e-1], [0, 1, 9.754115099857e-1], [0, 0, 9.512294245007e-1]], 1e-10);
@@ -115,7 +115,7 @@ describe('discretiseVanLoan', () => {
   });
 
   it('reproduces the heading / Gauss-Markov gyro bias / scale-factor example', () => {
-    // REFERENCES.md §3.2(e) (computed with scipy.linalg.expm): N = 0.1 °/√h, σ_b = 10 °/h, τ_b = 300 s, T = 1 s.
+    // docs/checks.md §3.2(e) (computed with scipy.linalg.expm): N = 0.1 °/√h, σ_b = 10 °/h, τ_b = 300 s, T = 1 s.
     const arw = (0.1 * DEG) / 60;
     const sigmaB = (10 * DEG) / 3600;
     const tauB = 300;
@@ -132,7 +132,7 @@ describe('discretiseVanLoan', () => {
       ],
       1e-10,
     );
-    // Closed form of REFERENCES.md §3.2(e) with x = βT. Its q₁₁ bracket
+    // Closed form of docs/checks.md §3.2(e) with x = βT. Its q₁₁ bracket
     // T − 2(1−e^{−x})/β + (1−e^{−2x})/(2β) cancels in doubles, so it is summed as the
     // series (1/β) Σ_{k≥3} (−1)^{k+1}(2^{k−1} − 2) x^k/k! (Taylor expansion of both exponentials, derived here).
     const beta = 1 / tauB;

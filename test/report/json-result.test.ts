@@ -69,7 +69,7 @@ describe('the report level (settings.level)', () => {
     const end = json.checkpoints.at(-1)!;
     expect(end.level).toBe('95%');
     const heading = end.budgets.find((q) => q.quantity === 'heading')!;
-    expect(heading.atLevel / heading.sigma).toBeCloseTo(1.959963984540054, 12); // z(0.975), REFERENCES.md §6 (scipy.stats.chi2)
+    expect(heading.atLevel / heading.sigma).toBeCloseTo(1.959963984540054, 12); // z(0.975), docs/checks.md §6 (scipy.stats.chi2)
     const drms = end.budgets.find((q) => q.quantity === 'drms')!;
     expect(drms.atLevel).toBe(drms.sigma);
   });

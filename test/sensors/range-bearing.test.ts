@@ -24,8 +24,8 @@ function fixCovariance(priorSigmaM: number, sensor: SensorInput) {
 }
 
 describe('range and bearing to a landmark', () => {
-  it('fixes position with the first-order polar-to-Cartesian covariance (REFERENCES.md §7: r 1000 m, 30 deg, 10 m, 1 deg)', () => {
-    // Bar-Shalom, Li & Kirubarajan 2001 (from memory); values computed with numpy in REFERENCES.md §7.
+  it('fixes position with the first-order polar-to-Cartesian covariance (docs/checks.md §7: r 1000 m, 30 deg, 10 m, 1 deg)', () => {
+    // Bar-Shalom, Li & Kirubarajan 2001 (from memory); values computed with numpy in docs/checks.md §7.
     // A 10 km prior leaves the fix within 3e-6 relative of J R Jᵀ.
     const p = fixCovariance(1e4, radar());
     expect(Math.abs(p.nn / 151.15435494670 - 1)).toBeLessThan(1e-5);
@@ -36,7 +36,7 @@ describe('range and bearing to a landmark', () => {
   it('matches the information-form posterior (P0⁻¹ + Hᵀ R⁻¹ H)⁻¹ exactly for a finite prior (ml-matrix inverse)', () => {
     const b = 30 * DEG, r = 1000;
     const dN = r * Math.cos(b), dE = r * Math.sin(b);
-    // ENGINE.md §5 rows on (dN, dE): range -dN/r, -dE/r; bearing dE/r², -dN/r².
+    // docs/planar-model.md §5 rows on (dN, dE): range -dN/r, -dE/r; bearing dE/r², -dN/r².
     const h = new Matrix([[-dN / r, -dE / r], [dE / r ** 2, -dN / r ** 2]]);
     const rInv = Matrix.diag([1 / 100, 1 / DEG ** 2]);
     const info = Matrix.eye(2).mul(1 / 50 ** 2).add(h.transpose().mmul(rInv).mmul(h));

@@ -14,7 +14,7 @@ function finalHeadingVariance(rows: Parameters<typeof gyro>[0], durationS: numbe
 describe('yaw gyro rows', () => {
   it('integrate a bias-instability row as a stationary Gauss-Markov bias: Var = 2σ²T(t − T(1 − e^{−t/T}))', () => {
     // Integrated first-order Markov process (Brown & Hwang, Introduction to Random Signals, from memory);
-    // σ = floor / 0.6173643 so the Allan deviation peaks at the floor (ENGINE.md §3).
+    // σ = floor / 0.6173643 so the Allan deviation peaks at the floor (docs/planar-model.md §3).
     const floorSI = (5 * DEG) / 3600, T = 150, t = 300;
     const sigma = floorSI / GM_ALLAN_PEAK_RATIO;
     const expected = 2 * sigma ** 2 * T * (t - T * (1 - Math.exp(-t / T)));
@@ -28,13 +28,13 @@ describe('yaw gyro rows', () => {
     expect(Math.abs(asB / asFloor - 1)).toBeLessThan(1e-12);
   });
 
-  it('treats a noise density in deg/s/√Hz as the two-sided ARW N (0.01 deg/s/√Hz = 0.6 deg/√h, REFERENCES.md §2)', () => {
+  it('treats a noise density in deg/s/√Hz as the two-sided ARW N (0.01 deg/s/√Hz = 0.6 deg/√h, docs/checks.md §2)', () => {
     const density = finalHeadingVariance([{ id: 'n', kind: 'white-noise', value: q(0.01, 'deg/s/√Hz') }], 100);
     const arw = finalHeadingVariance([{ id: 'n', kind: 'white-noise', value: q(0.6, 'deg/√h') }], 100);
     expect(Math.abs(density / arw - 1)).toBeLessThan(1e-12);
   });
 
-  it('halves the PSD of a density marked one-sided (REFERENCES.md §2, convention trap)', () => {
+  it('halves the PSD of a density marked one-sided (docs/checks.md §2, convention trap)', () => {
     const two = finalHeadingVariance([{ id: 'n', kind: 'white-noise', value: q(0.01, 'deg/s/√Hz') }], 100);
     const one = finalHeadingVariance([{ id: 'n', kind: 'white-noise', value: q(0.01, 'deg/s/√Hz'), densitySides: 'one' }], 100);
     expect(Math.abs(one / two - 0.5)).toBeLessThan(1e-12);

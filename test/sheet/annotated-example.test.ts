@@ -33,7 +33,7 @@ describe('budgets/annotated-example.json', () => {
     expect(ev.cellErrors).toEqual([]);
     expect(ev.omitted).toEqual([]);
     expect(ev.blocked).toBeUndefined();
-    // REFERENCES.md §2 (computed): 1 °/s/√Hz = 60 °/√h, so 0.005 °/s/√Hz is 0.3 °/√h.
+    // docs/checks.md §2 (computed): 1 °/s/√Hz = 60 °/√h, so 0.005 °/s/√Hz is 0.3 °/√h.
     expectRelative(ev.cellValues.get('sensors[0].sources[0].value')!, 0.3, 1e-15);
   });
 

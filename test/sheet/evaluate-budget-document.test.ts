@@ -64,7 +64,7 @@ describe('evaluateBudgetDocument with good cells', () => {
       d.values!.rate = { value: '=CONVERTUNIT(1, "deg/h", "rad/s")', unit: 'rad/s' };
       d.values!.arw = { value: '=CONVERTUNIT(0.01, "deg/s/√Hz", "deg/√h")', unit: 'deg/√h' };
     });
-    // REFERENCES.md §2 (computed, pure arithmetic): 1 °/h = 4.84813681109536e-06 rad/s; 0.01 °/s/√Hz = 0.6 °/√h.
+    // docs/checks.md §2 (computed, pure arithmetic): 1 °/h = 4.84813681109536e-06 rad/s; 0.01 °/s/√Hz = 0.6 °/√h.
     expectRelative(cellValues.get('values.rate.value')!, 4.84813681109536e-6, 1e-15);
     expect(cellValues.get('values.rate.value')).toBe(convert(1, 'deg/h', 'rad/s', ''));
     expectRelative(cellValues.get('values.arw.value')!, 0.6, 1e-15);

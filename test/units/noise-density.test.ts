@@ -16,7 +16,7 @@ describe('noise density and random walk', () => {
   });
 
   it('divides a one-sided density by √2', () => {
-    // computed: a one-sided PSD is twice the two-sided one (REFERENCES §2 checks this with a one-sided Welch estimate)
+    // computed: a one-sided PSD is twice the two-sided one (docs/checks.md §2 checks this with a one-sided Welch estimate)
     expectRelative(randomWalkFromDensity(Math.SQRT2 * 3e-5, 'one'), 3e-5, 1e-15);
     expectRelative(densityFromRandomWalk(3e-5, 'one'), Math.SQRT2 * 3e-5, 1e-15);
   });

@@ -1,4 +1,5 @@
 import { formatSignificant } from '../../src/units';
+import { QUANTITIES } from '../../src/inputs/quantities';
 import type { OutageHoldEntry, RequirementEntry } from './result-shapes';
 
 /** A value for the findings' texts and tables: three significant digits (the unit goes beside it). */
@@ -15,7 +16,7 @@ export function levelText(level: string): string {
 
 /** A requirement's quantity in words ("horizontal" is the horizontal position). */
 export function quantityText(quantity: string): string {
-  return quantity === 'horizontal' ? 'horizontal position' : quantity;
+  return QUANTITIES.find((q) => q.id === quantity)?.label ?? quantity;
 }
 
 /**

@@ -1,12 +1,10 @@
 import type { JsonResult } from '../../src/report/json-result';
+import { quantitySpec, VARIANCE_QUANTITIES } from '../../src/inputs/quantities';
 import { NEUTRAL_COLOUR, seriesColour } from '../styles/palette';
 import type { LineDataset } from './chart-controller';
 
 /** Keys of `contributions` (and of checkpoint budgets) with their names in words, in the share picker's order. */
-export const SHARE_QUANTITIES: [key: string, label: string][] = [
-  ['heading', 'heading'], ['along', 'along-track'], ['cross', 'cross-track'], ['drms', 'DRMS'],
-  ['north', 'north'], ['east', 'east'], ['speed', 'speed'],
-];
+export const SHARE_QUANTITIES: [key: string, label: string][] = VARIANCE_QUANTITIES.map((q) => [quantitySpec(q).resultKey!, quantitySpec(q).label]);
 
 /** How many sources get their own colour; the rest are summed as "other sources". */
 export const NAMED_SOURCES = 7;

@@ -1,5 +1,6 @@
 import type { ViewResult } from '../../src/report/view-result';
 import { convert } from '../../src/units';
+import { quantitySpec, type VarianceQuantity } from '../../src/inputs/quantities';
 import { LIMIT_DASH, TOTAL_COLOUR, seriesColour } from '../styles/palette';
 import type { LineDataset } from './chart-controller';
 import { levelText, num, quantityText } from './findings-text';
@@ -14,17 +15,22 @@ interface KindSpec {
   /** Series keys of the JSON result drawn as they are, with their legend labels. */
   base: [key: string, label: string][];
   /** Requirement quantities drawn on this plot. */
-  quantities: string[];
+  quantities: readonly string[];
+}
+
+/** A quantity's 1σ series key in the JSON result and its legend label, from the quantity table. */
+function sigmaLine(q: VarianceQuantity): [key: string, label: string] {
+  return [quantitySpec(q).seriesKey!, `${quantitySpec(q).label} 1σ`];
 }
 
 const KINDS: Record<SigmaChartKind, KindSpec> = {
-  heading: { unit: 'deg', yTitle: 'heading error (deg)', base: [['heading_sigma_deg', 'heading 1σ']], quantities: ['heading'] },
+  heading: { unit: 'deg', yTitle: 'heading error (deg)', base: [sigmaLine('heading')], quantities: ['heading'] },
   position: {
     unit: 'm', yTitle: 'position error (m)',
-    base: [['along_sigma_m', 'along-track 1σ'], ['cross_sigma_m', 'cross-track 1σ'], ['drms_m', 'DRMS']],
+    base: [sigmaLine('along-track'), sigmaLine('cross-track'), [quantitySpec('drms').seriesKey!, quantitySpec('drms').label]],
     quantities: ['horizontal', 'north', 'east', 'along-track', 'cross-track'],
   },
-  speed: { unit: 'm/s', yTitle: 'speed error (m/s)', base: [['speed_sigma_mps', 'speed 1σ']], quantities: ['speed'] },
+  speed: { unit: 'm/s', yTitle: 'speed error (m/s)', base: [sigmaLine('speed')], quantities: ['speed'] },
 };
 
 /** Requirement curves that would repeat a series already drawn: a quantity's 1σ, DRMS, and R95 when shown. */

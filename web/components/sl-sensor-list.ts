@@ -44,7 +44,7 @@ export class SlSensorList extends LitElement {
   /** Index of the picked sensor. */
   @property({ type: Number }) selected = 0;
 
-  @state() private addKind: SensorKind = 'yaw-gyro';
+  @state() private addKind: SensorKind = SENSOR_KIND_NAMES[0];
 
   override render() {
     const sensors = this.store.document.sensors;

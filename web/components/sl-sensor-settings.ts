@@ -11,12 +11,6 @@ import './sl-landmark-table';
 import './sl-outage-table';
 import './sl-quantity';
 
-const OBSERVABLES = [
-  { value: 'range-bearing', label: 'range and bearing' },
-  { value: 'range', label: 'range only' },
-  { value: 'bearing', label: 'bearing only' },
-] as const;
-
 /**
  * The settings of the picked sensor that are not rows: its rate, and for
  * aiding sensors the outages; for range-bearing sensors also the observables,
@@ -45,29 +39,30 @@ export class SlSensorSettings extends LitElement {
     const s = this.store.document.sensors[this.sensorIndex];
     if (!s) return nothing;
     const base = `sensors[${this.sensorIndex}]`;
-    const q = (field: string, label: string, dims: DimensionName[], optional = false) => html`<label class="field"><span>${label}</span>
+    const q = (field: string, label: string, dims: readonly DimensionName[], optional = false) => html`<label class="field"><span>${label}</span>
       <sl-quantity .store=${this.store} .doc=${this.doc} .view=${this.view} path=${`${base}.${field}`} label=${`${s.id} ${label.toLowerCase()}`}
         .dimensions=${dims} ?optional=${optional}></sl-quantity></label>`;
-    const ranger = s.kind === 'range-bearing';
+    const settings = SENSOR_KINDS[s.kind]?.settings ?? [];
     const own = this.ownProblem(s);
     return html`
       <h3>Settings of ${s.id}</h3>
       ${own ? html`<div class="blocked" role="alert">${own}</div>` : nothing}
       <div class="fields">
         ${q('rate', 'Rate', ['frequency'])}
-        ${ranger ? html`
-          <label class="field"><span>Observables</span>
-            <select aria-label=${`${s.id} observables`} @change=${this.observables}>
-              ${OBSERVABLES.map((o) => html`<option .value=${o.value} ?selected=${(s.observables ?? 'range-bearing') === o.value}>${o.label}</option>`)}
-            </select></label>
-          ${q('maxRange', 'Maximum range', ['length'], true)}
-          ${q('fieldOfView', 'Field of view', ['angle'], true)}` : nothing}
+        ${settings.map((f) => {
+          if (f.type === 'quantity') return q(f.field, f.label, f.dimensions, f.optional);
+          if (f.type !== 'choice') return nothing;
+          return html`<label class="field"><span>${f.label}</span>
+            <select aria-label=${`${s.id} ${f.label.toLowerCase()}`} @change=${this.observables}>
+              ${f.choices.map((o) => html`<option .value=${o.value} ?selected=${(s[f.field] ?? f.fallback) === o.value}>${o.label}</option>`)}
+            </select></label>`;
+        })}
       </div>
       <label class="field"><span>Note</span><textarea rows="1" aria-label=${`${s.id} note`} .value=${s.note ?? ''} @change=${this.noteChanged}></textarea></label>
       <div class="tables">
         ${SENSOR_KINDS[s.kind]?.role === 'aiding' ? html`<section><h3>Outages</h3>
           <sl-outage-table .store=${this.store} .doc=${this.doc} .view=${this.view} .sensorIndex=${this.sensorIndex}></sl-outage-table></section>` : nothing}
-        ${ranger ? html`<section><h3>Landmarks</h3>
+        ${settings.some((f) => f.type === 'landmarks') ? html`<section><h3>Landmarks</h3>
           <sl-landmark-table .store=${this.store} .doc=${this.doc} .view=${this.view} .sensorIndex=${this.sensorIndex}></sl-landmark-table></section>` : nothing}
       </div>
     `;

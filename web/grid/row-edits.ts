@@ -10,38 +10,34 @@ import { unitDimension } from '../../src/units';
 import { uniqueId } from '../../src/edits/ids';
 import { renameRowReferences, renameSensorReferences } from '../../src/edits/references';
 import { defaultUnit, kindTakes, rowDimensions } from '../../src/edits/unit-choices';
+import { OPTION_FIELDS, optionFieldsOf } from '../../src/edits/row-options';
+import { SENSOR_KINDS } from '../../src/sensors/registry';
+import { SOURCE_KINDS } from '../../src/sources/registry';
 
-/** The correlation time a bias-instability row gets when nobody knows it: 100 s (FORMAT.md, common practice). */
-export const ASSUMED_CORRELATION_TIME_S = 100;
+const BIAS_INSTABILITY_TAU = SOURCE_KINDS['bias-instability'].assumedCells!.find((c) => c.field === 'correlationTime')!;
+
+/** The correlation time a bias-instability row gets when nobody knows it (declared in src/sources/bias-instability.ts). */
+export const ASSUMED_CORRELATION_TIME_S = BIAS_INSTABILITY_TAU.value;
 
 /** Provenance text of a correlation time filled in by the tool. */
-export const ASSUMED_CORRELATION_NOTE = `assumed: correlation time ${ASSUMED_CORRELATION_TIME_S} s, the usual guess when the datasheet gives none; replace it with the Allan plot's value`;
+export const ASSUMED_CORRELATION_NOTE = BIAS_INSTABILITY_TAU.note;
 
-const ID_BASE: Record<SourceKind, string> = {
-  'white-noise': 'noise', 'bias-instability': 'bi', 'rate-random-walk': 'rrw', 'turn-on-bias': 'bias',
-  'scale-factor': 'sf', quantisation: 'lsb', multipath: 'multipath',
-};
-
-const SENSOR_DEFAULTS: Record<SensorKind, { id: string; rateHz: number }> = {
-  'yaw-gyro': { id: 'gyro', rateHz: 100 }, 'wheel-speed': { id: 'wheel', rateHz: 20 }, 'gnss-position': { id: 'gnss', rateHz: 1 },
-  compass: { id: 'compass', rateHz: 10 }, 'range-bearing': { id: 'ranger', rateHz: 5 },
-};
-
-/** Fills in what a row needs and nobody typed: a bias-instability correlation time, marked as assumed. */
+/** Fills in what a row needs and nobody typed (the kind's `assumedCells`), marked as assumed. */
 export function fillRequired(row: SourceRow): void {
-  if (row.kind === 'bias-instability' && row.correlationTime === undefined) {
-    row.correlationTime = { value: ASSUMED_CORRELATION_TIME_S, unit: 's' };
+  for (const cell of SOURCE_KINDS[row.kind]?.assumedCells ?? []) {
+    if (row[cell.field] !== undefined) continue;
+    row[cell.field] = { value: cell.value, unit: cell.unit };
     row.assumed = true;
-    row.provenance = row.provenance ? `${row.provenance}; ${ASSUMED_CORRELATION_NOTE}` : ASSUMED_CORRELATION_NOTE;
+    row.provenance = row.provenance ? `${row.provenance}; ${cell.note}` : cell.note;
   }
 }
 
 /** A new row of `kind` for a sensor of `sensorKind`, with an id not among `taken`. Throws nothing. */
 export function newRow(sensorKind: SensorKind, kind: SourceKind, taken: readonly string[]): SourceRow {
   const row: SourceRow = {
-    id: uniqueId(ID_BASE[kind], taken), kind, value: 0, unit: defaultUnit(rowDimensions(sensorKind, kind)), provenance: '', assumed: false,
+    id: uniqueId(SOURCE_KINDS[kind].idBase, taken), kind, value: 0, unit: defaultUnit(rowDimensions(sensorKind, kind)), provenance: '', assumed: false,
   };
-  if (kind === 'multipath') row.multipathModel = 'states';
+  writeNewRowOption(row);
   fillRequired(row);
   return row;
 }
@@ -53,14 +49,21 @@ export function newRow(sensorKind: SensorKind, kind: SourceKind, taken: readonly
  */
 export function changeRowKind(row: SourceRow, sensorKind: SensorKind, kind: SourceKind): void {
   row.kind = kind;
-  for (const field of ['biasForm', 'densitySides', 'multipathModel', 'quantum'] as const) delete row[field];
+  const keep = optionFieldsOf(sensorKind, kind);
+  for (const field of OPTION_FIELDS) if (field !== 'component' && !keep.includes(field)) delete row[field];
   if (!kindTakes(kind, 'correlationTime')) delete row.correlationTime;
   if (!kindTakes(kind, 'rate')) delete row.rate;
   const dims = rowDimensions(sensorKind, kind);
   const dim = unitDimension(row.unit);
   if (dim === undefined || !dims.includes(dim)) row.unit = defaultUnit(dims);
-  if (kind === 'multipath') row.multipathModel = 'states';
+  writeNewRowOption(row);
   fillRequired(row);
+}
+
+/** Writes out the option value the row's kind wants on a new row (multipath: "states"). */
+function writeNewRowOption(row: SourceRow): void {
+  const spec = SOURCE_KINDS[row.kind];
+  if (spec.option !== undefined && spec.newRowOption !== undefined) row[spec.option.field] = spec.newRowOption as never;
 }
 
 /** Renames row `rowIndex` of sensor `sensorIndex` and every formula that refers to it. */
@@ -78,7 +81,7 @@ export function renameSensor(doc: BudgetDocument, index: number, id: string): vo
 
 /** A new sensor of `kind` with its usual rate and no rows, its id not among `taken`. Throws nothing. */
 export function newSensor(kind: SensorKind, taken: readonly string[]): SensorEntry {
-  const d = SENSOR_DEFAULTS[kind];
+  const d = SENSOR_KINDS[kind].defaults;
   return { id: uniqueId(d.id, taken), kind, rate: { value: d.rateHz, unit: 'Hz' }, sources: [] };
 }
 

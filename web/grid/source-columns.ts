@@ -8,6 +8,8 @@ import type { SensorKind } from '../../src/inputs/budget-input';
 import type { SourceRow } from '../../src/document';
 import { unitDimension } from '../../src/units';
 import { kindTakes } from '../../src/edits/unit-choices';
+import { rowOptionFor, type RowOption } from '../../src/edits/row-options';
+import type { OptionField } from '../../src/sources/source-kind';
 
 /** A grid column: its key, header text and header tooltip. */
 export interface SourceColumn {
@@ -36,35 +38,11 @@ export function columnIndex(key: SourceColumn['key']): number {
   return SOURCE_COLUMNS.findIndex((c) => c.key === key);
 }
 
-/** The option fields a row can carry. */
-export type OptionField = 'biasForm' | 'densitySides' | 'multipathModel' | 'component' | 'quantum';
+export type { OptionField, RowOption };
 
-/** The option that applies to a row: its field, the choices and the value meant when it is omitted. */
-export interface RowOption {
-  field: OptionField;
-  label: string;
-  choices: { value: string; label: string }[];
-  fallback: string;
-}
-
-const OPTIONS: Record<OptionField, Omit<RowOption, 'fallback'>> = {
-  biasForm: { field: 'biasForm', label: 'bias form', choices: [{ value: 'floor', label: 'Allan floor' }, { value: 'flicker-coefficient', label: 'flicker B' }] },
-  densitySides: { field: 'densitySides', label: 'density sides', choices: [{ value: 'two', label: 'two-sided' }, { value: 'one', label: 'one-sided' }] },
-  multipathModel: { field: 'multipathModel', label: 'multipath model', choices: [{ value: 'states', label: 'states' }, { value: 'folded', label: 'folded' }] },
-  component: { field: 'component', label: 'component', choices: [{ value: 'range', label: 'range' }, { value: 'bearing', label: 'bearing' }] },
-  quantum: { field: 'quantum', label: 'quantum', choices: [{ value: 'rate', label: 'rate LSB' }, { value: 'angle', label: 'angle LSB' }] },
-};
-
-/** The option of a row's kind on a sensor of `sensorKind`, or undefined when none applies. Throws nothing. */
+/** The option of a row's kind on a sensor of `sensorKind` (the kinds' own declarations), or undefined when none applies. Throws nothing. */
 export function rowOption(sensorKind: SensorKind, row: SourceRow): RowOption | undefined {
-  const dim = unitDimension(row.unit);
-  if (sensorKind === 'range-bearing') return { ...OPTIONS.component, fallback: dim === 'angle' ? 'bearing' : 'range' };
-  if (row.kind === 'bias-instability') return { ...OPTIONS.biasForm, fallback: 'floor' };
-  if (row.kind === 'multipath') return { ...OPTIONS.multipathModel, fallback: 'states' };
-  if (row.kind === 'quantisation' && sensorKind === 'yaw-gyro') return { ...OPTIONS.quantum, fallback: dim === 'angle' ? 'angle' : 'rate' };
-  const density = dim === 'angle-random-walk' || dim === 'velocity-random-walk';
-  if (row.kind === 'white-noise' && (density || row.densitySides !== undefined)) return { ...OPTIONS.densitySides, fallback: 'two' };
-  return undefined;
+  return rowOptionFor(sensorKind, row.kind, unitDimension(row.unit), (field) => row[field]);
 }
 
 /** Which columns a row has, by column index. Throws nothing. */

@@ -4,7 +4,7 @@ import type { SlLogAllanChart } from '../../../web/components/sl-log-allan-chart
 import { chooseFile, deepQuery, logImport, runAndWait, settle, whiteNoiseLog } from './helpers';
 
 // White noise of per-sample sigma σ at rate f has angle random walk N = σ/√f
-// (IEEE Std 952-1997 Annex C; REFERENCES.md §2): 0.05 deg/s at 100 Hz gives
+// (IEEE Std 952-1997 Annex C; docs/checks.md §2): 0.05 deg/s at 100 Hz gives
 // 0.005 deg/√s = 0.3 deg/√h (√h = 60 √s).
 const SIGMA_DEG_S = 0.05, RATE_HZ = 100, DURATION_S = 200;
 const EXPECTED_ARW = (SIGMA_DEG_S / Math.sqrt(RATE_HZ)) * 60;

@@ -37,10 +37,10 @@ describe('rows made from an Allan analysis', () => {
     const plan = allanCandidates(o, 'slope', 'yaw-gyro', SOURCE).find((c) => c.id === 'bias-instability')!.plan!;
     expect(plan.fields).to.deep.include({ unit: 'deg/h', biasForm: 'floor', assumed: false });
     expect(plan.fields.value as number).to.be.closeTo(b.floor, 1e-3 * b.floor);
-    // ENGINE.md §3: the Gauss-Markov Allan peak sits at τ = 1.8926 T.
+    // docs/planar-model.md §3: the Gauss-Markov Allan peak sits at τ = 1.8926 T.
     expect(plan.fields.correlationTime!.value as number).to.be.closeTo(b.tauFloorS / 1.8926, 1e-3 * b.tauFloorS);
     expect(plan.fields.provenance).to.match(/^fitted from log\.csv, 2024-05-06, 40000 samples; Allan deviation floor .* T_bi = τ_floor/);
-    // The peak of a Gauss-Markov Allan deviation is 0.6173643 σ (ENGINE.md §3): 0.02 deg/s gives 44.45 deg/h, here from a finite log.
+    // The peak of a Gauss-Markov Allan deviation is 0.6173643 σ (docs/planar-model.md §3): 0.02 deg/s gives 44.45 deg/h, here from a finite log.
     expect(b.floor / (0.6173643 * 0.02 * 3600) - 1).to.be.within(-0.3, 0.3);
     const doc = orchard();
     const [written] = writeRows(doc, 0, [plan]);

@@ -8,7 +8,7 @@ import { moveInGrid } from '../../../web/grid/grid-navigation';
 import { idProblem, sensorIdProblem, uniqueId, valueNameProblem } from '../../../src/edits/ids';
 import { parsePastedRows, rowsAsText } from '../../../web/grid/paste-rows';
 import { collapseConversions, rewriteNames } from '../../../src/edits/references';
-import { rowDimensions, SENSOR_ROW_DIMENSIONS, unitGroups } from '../../../src/edits/unit-choices';
+import { rowDimensions, unitGroups } from '../../../src/edits/unit-choices';
 
 describe('the grid helpers', () => {
   it('reading typed text gives numbers, formulas, empty cells, or a reason', () => {
@@ -48,8 +48,8 @@ describe('the grid helpers', () => {
   });
 
   it('each sensor narrows row units to dimensions the registry allows for kinds the sensor takes', () => {
-    for (const [sensor, kinds] of Object.entries(SENSOR_ROW_DIMENSIONS)) {
-      for (const [kind, dims] of Object.entries(kinds)) {
+    for (const [sensor, spec] of Object.entries(SENSOR_KINDS)) {
+      for (const [kind, dims] of Object.entries(spec.rows)) {
         expect(SENSOR_KINDS[sensor as SensorKind].sourceKinds, `${sensor} ${kind}`).to.include(kind);
         const allowed = SOURCE_KINDS[kind as keyof typeof SOURCE_KINDS].parameters.find((p) => p.field === 'value')!.dimensions;
         for (const d of dims) expect(allowed, `${sensor} ${kind}`).to.include(d);
