@@ -54,5 +54,5 @@ describe('the record plan', () => {
     }
     kept.forEach((k, r) => expect(thinned.series.r95M[r]).toBe(whole.series.r95M[k]));
     thinned.history.calibrationSigma.forEach((sigma, c) => kept.forEach((k, r) => expect(sigma[r]).toBe(whole.history.calibrationSigma[c][k])));
-  });
+  }, 30_000);
 });
