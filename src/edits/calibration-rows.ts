@@ -56,9 +56,15 @@ export function calibrationCandidates(r: CalibrationReport, sensorKind: SensorKi
     fields: { value: cellNumber(r.scaleFactor.uncertainty), unit: 'ppm', provenance, assumed: false },
   };
   return [
-    { id: 'offset', label: offset.label, ...(sensorKind === 'wheel-speed' ? { refusal: wheelOffsetReason(r) } : candidate(sensorKind, offset)) },
+    { id: 'offset', label: offset.label, ...offsetCandidate(r, sensorKind, offset) },
     { id: 'scale-factor', label: scale.label, ...candidate(sensorKind, scale) },
   ];
+}
+
+/** A speed sensor that takes no offset row (a wheel-speed sensor) is told why, with the fitted value. */
+function offsetCandidate(r: CalibrationReport, sensorKind: SensorKind, plan: RowPlan): { plan?: RowPlan; refusal?: string } {
+  const c = candidate(sensorKind, plan);
+  return c.refusal && r.offset.unitSI === 'm/s' ? { refusal: wheelOffsetReason(r) } : c;
 }
 
 function candidate(sensorKind: SensorKind, plan: RowPlan): { plan?: RowPlan; refusal?: string } {
