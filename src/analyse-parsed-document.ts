@@ -68,7 +68,7 @@ export function analyseParsedDocument(doc: BudgetDocument, notes: string[], opti
   if (!sheet.input) return { ...base, blocked: { message: sheet.blocked ?? 'nothing to compute' } };
   try {
     options.beforeCompute?.(sheet.input);
-    const budget = computeBudget(sheet.input, { contributions: options.contributions });
+    const budget = computeBudget(sheet.input, { contributions: options.contributions, every: options.report ? options.report.every : undefined });
     const report = options.report === false ? undefined : buildJsonResult(budget, title, reportEvery(budget, options.report));
     return { ...base, budget, ...(report && { report }) };
   } catch (e) {

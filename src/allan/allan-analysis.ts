@@ -35,6 +35,12 @@ export interface NoiseTermRow {
   readonly upperBound?: boolean;
   /** Fit method: the non-negativity bound held the term at zero. */
   readonly atZero?: boolean;
+  /**
+   * Fit method: the fitted c = value² lies within two of its standard errors
+   * of zero (value < 4 × uncertainty, since se(c) = 2·value·uncertainty):
+   * the curve does not show the term, whatever the number says.
+   */
+  readonly notSignificant?: boolean;
   /** Slope method: τ in s where the value was read (the floor's τ for bias instability). */
   readonly readAtTauS?: number;
 }
@@ -78,12 +84,17 @@ function fromSlope(kind: AllanSensorKind, r: TermReading): NoiseTermRow {
   };
 }
 
+/** A fitted coefficient below this many standard errors is not significant (c within 2 se(c) of zero). */
+export const SIGNIFICANCE_FACTOR = 4;
+
 function fromFit(kind: AllanSensorKind, t: FittedTerm): NoiseTermRow {
   const lab = SENSOR_TERM_UNITS[kind].terms[t.id];
   const toDisplay = (x: number): number => (Number.isFinite(x) ? convert(x, lab.unitSI, lab.unit, t.id) : x);
   return {
     name: lab.name, id: t.id, value: toDisplay(t.coefficient), unit: lab.unit, valueSI: t.coefficient, unitSI: lab.unitSI,
     uncertainty: toDisplay(t.standardError), method: 'fit', atZero: t.atZero,
+    // A z-test at about 95 % on the linear parameter c (common practice, no source).
+    notSignificant: !t.atZero && t.coefficient < SIGNIFICANCE_FACTOR * t.standardError,
   };
 }
 

@@ -20,7 +20,7 @@ function curveTable(r: LogAllanResult): string[] {
 
 function slopeLine(t: NoiseTermRow): string {
   const name = t.name.padEnd(22);
-  if (t.upperBound) return `${name}≤ ${fmt(t.value)} ${t.unit}   (slope not seen; bound set at τ = ${fmt(t.readAtTauS ?? Number.NaN)} s)`;
+  if (t.upperBound) return `${name}≤ ${fmt(t.value)} ${t.unit}   (slope not seen; bound set at τ = ${fmt(t.readAtTauS ?? Number.NaN)} s; see the fit below)`;
   const where = t.id === 'bias-instability' ? `floor at τ = ${fmt(t.readAtTauS ?? Number.NaN)} s` : `read at τ = ${fmt(t.readAtTauS ?? Number.NaN)} s`;
   return `${name}${fmt(t.value)} ± ${fmt(t.uncertainty)} ${t.unit}   (${where}${t.extrapolated ? ', extrapolated beyond the points used' : ''})`;
 }
@@ -28,6 +28,7 @@ function slopeLine(t: NoiseTermRow): string {
 function fitLine(t: NoiseTermRow): string {
   const name = t.name.padEnd(22);
   if (t.atZero) return `${name}0 ${t.unit}   (held at zero; resolvable from about ${fmt(t.uncertainty)} ${t.unit})`;
+  if (t.notSignificant) return `${name}${fmt(t.value)} ± ${fmt(t.uncertainty)} ${t.unit}   (not significant: within two standard errors of zero, the curve does not show it)`;
   return `${name}${fmt(t.value)} ± ${fmt(t.uncertainty)} ${t.unit}`;
 }
 

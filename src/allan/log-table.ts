@@ -8,6 +8,12 @@ export interface LogParseOptions {
   readonly valueColumns: readonly string[];
   /** Header name of the time column, if any. */
   readonly timeColumn?: string;
+  /**
+   * Without `timeColumn`: names tried in order (ignoring case) for a time
+   * column, e.g. ['time', 't', 'time_s']; the first found is used, and none
+   * found is an error naming them. Leave out for a log without time stamps.
+   */
+  readonly timeColumnCandidates?: readonly string[];
   /** Unit of the time column (s, ms, µs, min, h); default 's'. */
   readonly timeUnit?: string;
   /** Delimiter; default detected from the header line. */
@@ -28,6 +34,8 @@ export interface SensorLogTable {
   readonly columnsFound: readonly string[];
   /** One array per `valueColumns` entry, in the file's own unit. */
   readonly values: readonly Float64Array[];
+  /** The time column's header name, when one was named or found. */
+  readonly timeColumn?: string;
   /** Time of each row in s, when a time column was named. */
   readonly timeS?: Float64Array;
   /** Mean sample rate in Hz from the time column, when named. */

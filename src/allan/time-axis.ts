@@ -7,7 +7,7 @@
  * steps (of up to 100 001 steps spread evenly over the log, so that the check
  * stays linear); a step outside (1 ± tolerance) × nominal is a gap (or a
  * stutter, when short). The rate is (n − 1)/(t_last − t_first), the mean over
- * the whole log, once every step passed.
+ * the whole log, once every step passed, to 12 significant digits.
  */
 import { InputError } from '../errors';
 import { formatSignificant } from '../units';
@@ -85,5 +85,8 @@ export function checkTimeAxis(timeS: Float64Array, lines: RowLines, source: stri
         `or accept the steps with a larger gap tolerance (now ${tolerance})`,
     );
   }
-  return { rateHz: (timeS.length - 1) / (timeS[timeS.length - 1] - timeS[0]), nominalStepS: nominal };
+  // Rounded to 12 significant digits: time stamps carry fewer, and the division's binary round-off would
+  // otherwise print 100 Hz as 99.99999999999999.
+  const rateHz = Number(((timeS.length - 1) / (timeS[timeS.length - 1] - timeS[0])).toPrecision(12));
+  return { rateHz, nominalStepS: nominal };
 }

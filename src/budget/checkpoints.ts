@@ -31,13 +31,19 @@ export interface CheckpointBudget {
   quantities: QuantityBudget[];
 }
 
+/** A checkpoint's id and requested time, validated. */
+export interface WantedCheckpoint {
+  id: string;
+  /** Requested time, s. */
+  s: number;
+}
+
 /**
- * Budget tables at the checkpoints (and always at the mission's end, as id "end").
+ * Validates the checkpoints against the mission and adds "end" (the mission's
+ * end) unless one is named so.
  * @throws InputError for a checkpoint outside the mission.
  */
-export function checkpointBudgets(list: CheckpointInput[] | undefined, series: BudgetSeries, sources: ModelSource[]): CheckpointBudget[] {
-  const t = series.tS;
-  const endS = t[t.length - 1];
+export function resolveCheckpoints(list: CheckpointInput[] | undefined, endS: number): WantedCheckpoint[] {
   const wanted = requireArray(list ?? [], 'checkpoints', true).map((c, i) => {
     const p = `checkpoints[${i}]`;
     const id = requireId(c?.id, `${p}.id`);
@@ -46,6 +52,16 @@ export function checkpointBudgets(list: CheckpointInput[] | undefined, series: B
     return { id, s };
   });
   if (!wanted.some((w) => w.id === 'end')) wanted.push({ id: 'end', s: endS });
+  return wanted;
+}
+
+/**
+ * Budget tables at the checkpoints (and always at the mission's end, as id
+ * "end"), each read at the series' step nearest its time: the series must
+ * hold the step of the run nearest each checkpoint (the record plan keeps them).
+ */
+export function checkpointBudgets(wanted: WantedCheckpoint[], series: BudgetSeries, sources: ModelSource[]): CheckpointBudget[] {
+  const t = series.tS;
   return wanted.map(({ id, s }) => {
     const k = nearestStep(t, s);
     return { id, tS: t[k], requestedS: s, quantities: budgetsAt(series, sources, k) };

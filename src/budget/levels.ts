@@ -24,9 +24,12 @@ export function limitDimension(q: QuantityName): DimensionName {
  */
 export function levelSeries(series: BudgetSeries, quantity: QuantityName, level: ConfidenceLevel, path: string): Float64Array {
   if (quantity === 'horizontal') {
-    if (level === '95%') return series.r95M;
-    if (level === '50%') return series.cepM;
     const drms = requireVariance(series, 'drms', path);
+    if (level === '95%' || level === '50%') {
+      const radii = level === '95%' ? series.r95M : series.cepM;
+      if (radii.length !== drms.length) throw new Error('CEP/R95 were not computed for this series (buildTotalSeries with radii)');
+      return radii;
+    }
     const f = level === '2sigma' ? 2 : 1;
     return drms.map((v) => f * Math.sqrt(Math.max(0, v)));
   }

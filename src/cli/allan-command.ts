@@ -128,6 +128,9 @@ export async function readLogFile(file: string, options: Omit<LogParseOptions, '
   return reader.finish();
 }
 
+/** Time-column names found without --time-column (matched ignoring case), in order. */
+export const TIME_COLUMN_NAMES: readonly string[] = ['time', 't', 'time_s'];
+
 /** The JSON form of the result: { file, samples, rateHz, points, terms, … }. */
 export function allanJson(file: string, samples: number, rateHz: number, r: LogAllanResult): object {
   return {
@@ -143,7 +146,8 @@ function writeTerms(options: AllanCommandOptions, target: IntoTarget, samples: n
   const candidates = allanCandidates({ result, rateHz }, options.terms ?? 'slope', doc.sensors[index].kind, logSource(options.file, samples));
   const plans = candidates.flatMap((c) => (c.plan && !c.caution ? [c.plan] : []));
   const skipped = candidates.filter((c) => !c.plan || c.caution).map((c) => `  skipped ${c.label}: ${c.refusal ?? c.caution}`);
-  return [...writePlans(target, doc, index, plans), ...skipped];
+  const notes = candidates.filter((c) => c.plan && !c.caution && c.note).map((c) => `  ${c.label}: ${c.note}`);
+  return [...writePlans(target, doc, index, plans), ...notes, ...skipped];
 }
 
 /**
@@ -156,15 +160,14 @@ export async function allanCommand(options: AllanCommandOptions, io: Io): Promis
     if (options.rateHz !== undefined && options.timeColumn !== undefined) {
       throw new InputError('--rate', 'give either --time-column (the rate comes from the time stamps) or --rate, not both');
     }
-    if (options.rateHz === undefined && options.timeColumn === undefined) {
-      throw new InputError('--rate', 'the log needs a time column (--time-column NAME) or a sample rate (--rate HZ)');
-    }
     resolveLogKind(options.unit, options.kind);
     if (options.timeUnit !== undefined) unitFor(options.timeUnit, 'time', '--time-unit');
     const started = performance.now();
     const table = await readLogFile(options.file, {
       valueColumns: [options.column], timeColumn: options.timeColumn, timeUnit: options.timeUnit, gapTolerance: options.gapTolerance,
-      optionNames: { [options.column]: '--column', ...(options.timeColumn ? { [options.timeColumn]: '--time-column' } : {}) },
+      // Without --time-column or --rate, a column named time, t or time_s is the time axis.
+      timeColumnCandidates: options.rateHz === undefined && options.timeColumn === undefined ? TIME_COLUMN_NAMES : undefined,
+      optionNames: { [options.column]: '--column', timeColumn: '--time-column', ...(options.timeColumn ? { [options.timeColumn]: '--time-column' } : {}) },
     });
     const parsed = performance.now();
     const rateHz = table.rateHz ?? options.rateHz!;

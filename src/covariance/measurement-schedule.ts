@@ -1,4 +1,4 @@
-import type { ErrorModel, MeasurementNoisePiece } from './error-model';
+import type { ErrorModel, MeasurementNoisePiece, MeasurementStream } from './error-model';
 import { TIME_SLACK_S, type NominalTrajectory } from '../mission/nominal-trajectory';
 
 /** One scalar measurement to process at a step boundary, with h in the model's states. */
@@ -21,45 +21,72 @@ export function inOutage(outages: { startS: number; endS: number }[], tS: number
 }
 
 /**
- * Every scalar measurement of the mission, grouped by the step boundary it is
- * processed at: a sensor at rate f measures at t = j/f and is processed at
- * the first boundary at or after t, in sensor order (docs/planar-model.md §5).
- * Built before propagation so that geometry errors (a landmark on the path)
- * are reported as input errors, not from inside the loop.
+ * The scalar measurements of the mission, generated step by step as the run
+ * asks for them (nothing is stored ahead: 64 visible landmarks at 10 Hz
+ * would be about a gigabyte): a sensor at rate f measures at t = j/f and is
+ * processed at the first boundary at or after t, in sensor order (docs/planar-model.md
+ * §5). A geometry error (a landmark on the path) is thrown as the
+ * InputError the stream raises, when the run reaches that measurement.
  */
-export function scheduleMeasurements(model: ErrorModel, traj: NominalTrajectory): ScheduledMeasurement[][] {
-  const last = traj.tS.length - 1;
-  const endS = traj.tS[last];
-  const byBoundary: ScheduledMeasurement[][] = Array.from({ length: last + 1 }, () => []);
-  const rByKey = noiseByKey(model);
-  const n = model.states.length;
-  const { along, cross } = model.core;
-  const h = new Float64Array(n);
-  for (const stream of model.streams) {
-    for (let j = 0; ; j++) {
-      const tS = j / stream.rateHz;
-      if (tS > endS + TIME_SLACK_S) break;
-      if (inOutage(stream.outages, tS)) continue;
-      const k = Math.min(last, Math.max(0, Math.ceil(tS / traj.stepS - 1e-9)));
-      const psi = traj.headingRad[k];
-      const c = Math.cos(psi), s = Math.sin(psi);
-      const rows = stream.rowsAt({ northM: traj.northM[k], eastM: traj.eastM[k], headingRad: psi });
-      for (const row of rows) {
-        h.fill(0);
-        // dN = c pA - s pC, dE = s pA + c pC (path frame to north/east).
-        h[along] += row.hNorth * c + row.hEast * s;
-        h[cross] += -row.hNorth * s + row.hEast * c;
-        for (const [idx, coeff] of row.hStates) h[idx] += coeff;
-        const r = rByKey.get(row.noiseKey) ?? NO_NOISE;
-        let count = 0;
-        for (let i = 0; i < n; i++) if (h[i] !== 0) count++;
-        const hIdx = new Int32Array(count), hVal = new Float64Array(count);
-        for (let i = 0, c = 0; i < n; i++) if (h[i] !== 0) { hIdx[c] = i; hVal[c++] = h[i]; }
-        byBoundary[k].push({ key: row.key, sensorId: stream.sensorId, tS, hIdx, hVal, ...r });
+export class MeasurementSchedule {
+  private readonly last: number;
+  private readonly endS: number;
+  private readonly next: number[];
+  private readonly rByKey: Map<string, NoiseOwners>;
+  private readonly h: Float64Array;
+  private readonly due: ScheduledMeasurement[] = [];
+
+  constructor(private readonly model: ErrorModel, private readonly traj: NominalTrajectory) {
+    this.last = traj.tS.length - 1;
+    this.endS = traj.tS[this.last];
+    this.next = model.streams.map(() => 0);
+    this.rByKey = noiseByKey(model);
+    this.h = new Float64Array(model.states.length);
+  }
+
+  /**
+   * The measurements processed at boundary k, in order; boundaries must be
+   * asked for in increasing k. The returned list is reused by the next call.
+   */
+  at(k: number): readonly ScheduledMeasurement[] {
+    this.due.length = 0;
+    this.model.streams.forEach((stream, i) => {
+      for (let j = this.next[i]; ; j++) {
+        const tS = j / stream.rateHz;
+        if (tS > this.endS + TIME_SLACK_S || this.boundaryOf(tS) > k) {
+          this.next[i] = j;
+          return;
+        }
+        if (!inOutage(stream.outages, tS)) this.emit(stream, tS, k);
       }
+    });
+    return this.due;
+  }
+
+  private boundaryOf(tS: number): number {
+    return Math.min(this.last, Math.max(0, Math.ceil(tS / this.traj.stepS - 1e-9)));
+  }
+
+  private emit(stream: MeasurementStream, tS: number, k: number): void {
+    const { traj, h } = this;
+    const n = h.length;
+    const { along, cross } = this.model.core;
+    const psi = traj.headingRad[k];
+    const c = Math.cos(psi), s = Math.sin(psi);
+    for (const row of stream.rowsAt({ northM: traj.northM[k], eastM: traj.eastM[k], headingRad: psi })) {
+      h.fill(0);
+      // dN = c pA - s pC, dE = s pA + c pC (path frame to north/east).
+      h[along] += row.hNorth * c + row.hEast * s;
+      h[cross] += -row.hNorth * s + row.hEast * c;
+      for (const [idx, coeff] of row.hStates) h[idx] += coeff;
+      const r = this.rByKey.get(row.noiseKey) ?? NO_NOISE;
+      let count = 0;
+      for (let i = 0; i < n; i++) if (h[i] !== 0) count++;
+      const hIdx = new Int32Array(count), hVal = new Float64Array(count);
+      for (let i = 0, e = 0; i < n; i++) if (h[i] !== 0) { hIdx[e] = i; hVal[e++] = h[i]; }
+      this.due.push({ key: row.key, sensorId: stream.sensorId, tS, hIdx, hVal, ...r });
     }
   }
-  return byBoundary;
 }
 
 /** R of one measurement key: its owners and their variances (shared by every event of that key). */
@@ -87,4 +114,14 @@ export function noiseByKey(model: { sources: readonly { measurementNoise: readon
     });
   }
   return map;
+}
+
+/**
+ * Every boundary's measurements at once, for analyses that pair two models'
+ * schedules step by step (the suboptimal-filter run); the covariance run itself
+ * asks {@link MeasurementSchedule} as it goes and stores nothing ahead.
+ */
+export function scheduleMeasurements(model: ErrorModel, traj: NominalTrajectory): ScheduledMeasurement[][] {
+  const schedule = new MeasurementSchedule(model, traj);
+  return Array.from({ length: traj.tS.length }, (_, k) => [...schedule.at(k)]);
 }

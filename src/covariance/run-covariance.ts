@@ -6,7 +6,8 @@ import {
 import { checkCovariance, type CovarianceIssue } from './covariance-health';
 import type { StepDiscretisation } from './discretise-step';
 import { DiscretisationCache } from './discretisation-cache';
-import { scheduleMeasurements, type ScheduledMeasurement } from './measurement-schedule';
+import { MeasurementSchedule, type ScheduledMeasurement } from './measurement-schedule';
+import { recordEveryStep, recordsEveryStep, type RecordPlan } from './record-plan';
 import {
   initialiseStorage, planSourceStorage, sourceEntry, sourceMatrix, type SourceStorage, type StoredModel,
 } from './source-storage';
@@ -50,7 +51,12 @@ export interface CovarianceProblem extends StoredModel {
 
 /** What a run of a {@link CovarianceProblem} produces. */
 export interface CovarianceRun {
+  /** Recorded steps (the rows of `recorded`); equals the run's steps unless a record plan thins them. */
   steps: number;
+  /** The trajectory step index of each recorded row. */
+  recordedSteps: Int32Array;
+  /** The total's recorded pairs (row 0 only) at every step of the run, for exact requirement verdicts. */
+  totalRecorded: Float64Array[];
   /** Sources with recorded contributions (0 when run without them). */
   sourceCount: number;
   /** One array per recorded pair: P[i][j] of the total at [k], of source s at [(s + 1) * steps + k]. */
@@ -69,14 +75,18 @@ export interface CovarianceRun {
 }
 
 /** What the planar covariance run produces. */
-export interface CovarianceHistory extends Omit<CovarianceRun, 'recorded'> {
+export interface CovarianceHistory extends Omit<CovarianceRun, 'recorded' | 'totalRecorded'> {
   entries: RecordedEntries;
+  /** The total's entries (row 0 only) at every step of the run, for exact requirement verdicts. */
+  totalEntries: RecordedEntries;
 }
 
 /** Options of {@link runCovariance}. */
 export interface RunOptions {
   /** Carry every source's P_s (default true); false runs the total only (what sizing needs). */
   contributions?: boolean;
+  /** Which steps keep their entries (default every step); see record-plan.ts. */
+  record?: RecordPlan;
 }
 
 /** Steps between full checks of the total covariance. */
@@ -101,21 +111,21 @@ interface RunState {
  * schedule, and the along/cross/heading/speed-scale entries recorded.
  */
 export function runCovariance(model: ErrorModel, traj: NominalTrajectory, options: RunOptions = {}): CovarianceHistory {
-  const schedule = scheduleMeasurements(model, traj);
+  const schedule = new MeasurementSchedule(model, traj);
   const { along, cross, heading, speedScale } = model.core;
   const pairs: [number, number][] = [[along, along], [cross, cross], [along, cross], [heading, heading]];
   if (speedScale >= 0) pairs.push([speedScale, speedScale]);
   const run = runCovarianceProblem({
     states: model.states, sources: model.sources, tS: traj.tS, discretisation: new DiscretisationCache(model, traj),
-    measurementsAt: (k) => schedule[k], recordedPairs: pairs,
+    measurementsAt: (k) => schedule.at(k), recordedPairs: pairs,
     calibrationStates: model.states.flatMap((s, i) => (s.calibration ? [i] : [])),
   }, options);
-  const { recorded, ...rest } = run;
-  const entries: RecordedEntries = {
-    alongAlong: recorded[0], crossCross: recorded[1], alongCross: recorded[2], headingHeading: recorded[3],
-    speedScale: speedScale >= 0 ? recorded[4] : new Float64Array(recorded[0].length),
-  };
-  return { ...rest, entries };
+  const { recorded, totalRecorded, ...rest } = run;
+  const entriesOf = (r: Float64Array[]): RecordedEntries => ({
+    alongAlong: r[0], crossCross: r[1], alongCross: r[2], headingHeading: r[3],
+    speedScale: speedScale >= 0 ? r[4] : new Float64Array(r[0].length),
+  });
+  return { ...rest, entries: entriesOf(recorded), totalEntries: entriesOf(totalRecorded) };
 }
 
 /**
@@ -127,7 +137,9 @@ export function runCovarianceProblem(problem: CovarianceProblem, options: RunOpt
   const contributions = options.contributions !== false;
   const n = problem.states.length;
   const S = contributions ? problem.sources.length : 0;
-  const steps = problem.tS.length;
+  const runSteps = problem.tS.length;
+  const recordPlan = options.record ?? recordEveryStep(runSteps);
+  const steps = recordPlan.recordedSteps.length;
   const plan = planSourceStorage(problem, contributions);
   const st: RunState = {
     n, plan, mats: new Float64Array(plan.denseCount * n * n), vecs: new Float64Array(Math.max(1, plan.vectors) * n),
@@ -135,27 +147,34 @@ export function runCovarianceProblem(problem: CovarianceProblem, options: RunOpt
   };
   initialiseStorage(problem, plan, st.mats, st.vecs, contributions);
   const recorded = problem.recordedPairs.map(() => new Float64Array((S + 1) * steps));
+  // The total at every step: views of row 0 when every step is recorded, else arrays of their own.
+  const everyStep = recordsEveryStep(recordPlan);
+  const totalRecorded = everyStep ? recorded.map((r) => r.subarray(0, steps)) : problem.recordedPairs.map(() => new Float64Array(runSteps));
   const calibrationStates = [...problem.calibrationStates];
   const calibrationSigma = calibrationStates.map(() => new Float64Array(steps));
   const issues: CovarianceIssue[] = [];
   const counts: Record<string, number> = {};
 
-  for (let k = 0; k < steps; k++) {
+  for (let k = 0; k < runSteps; k++) {
     if (k > 0) for (const d of problem.discretisation.forStep(k)) propagateAll(st, d);
     for (const m of problem.measurementsAt(k)) {
       if (updateAll(st, m)) counts[m.sensorId] = (counts[m.sensorId] ?? 0) + 1;
       else noteIssue(issues, { kind: 'singular-innovation', tS: problem.tS[k], detail: `${m.key}: innovation variance is not positive` });
     }
-    record(st, problem.recordedPairs, S, k, steps, recorded);
-    calibrationStates.forEach((i, c) => (calibrationSigma[c][k] = Math.sqrt(Math.max(0, st.mats[i * n + i]))));
+    const row = recordPlan.rowOfStep[k];
+    if (row >= 0) {
+      record(st, problem.recordedPairs, S, row, steps, recorded);
+      calibrationStates.forEach((i, c) => (calibrationSigma[c][row] = Math.sqrt(Math.max(0, st.mats[i * n + i]))));
+    }
+    if (!everyStep) record(st, problem.recordedPairs, 0, k, runSteps, totalRecorded);
     // The full check (an LDLᵀ) every tenth step and at the end: a problem is reported within a second of mission time.
-    if (k % HEALTH_CHECK_EVERY === 0 || k === steps - 1) {
+    if (k % HEALTH_CHECK_EVERY === 0 || k === runSteps - 1) {
       const issue = checkCovariance(st.mats, 0, n, problem.tS[k], st.scratch);
       if (issue) noteIssue(issues, issue);
     }
   }
   return {
-    steps, sourceCount: S, recorded, calibrationStates, calibrationSigma,
+    steps, recordedSteps: recordPlan.recordedSteps, totalRecorded, sourceCount: S, recorded, calibrationStates, calibrationSigma,
     finalCovariance: st.mats.slice(0, n * n),
     finalSourceCovariances: Array.from({ length: S }, (_, s) => sourceMatrix(plan, st.mats, st.vecs, n, s)),
     measurementCounts: counts, issues,

@@ -39,6 +39,8 @@ export interface TermCandidate {
   plan?: RowPlan;
   refusal?: string;
   caution?: string;
+  /** Which reading the plan holds when it is not the one asked for (the fit's value where the slope was not seen). */
+  note?: string;
 }
 
 const ID_STEMS: Record<WritableTermId, string> = { 'quantisation': 'quant', 'random-walk': 'arw', 'bias-instability': 'bi', 'rate-random-walk': 'rrw' };
@@ -95,20 +97,38 @@ function biasCandidate(outcome: AllanOutcome, sensorKind: SensorKind, head: stri
   };
 }
 
+/**
+ * The reading a sloped term's row takes: the one asked for, except that a
+ * slope read-off that saw no slope (an upper bound only) gives way to the
+ * whole-curve fit's value when the fit finds the term significant; writing
+ * nothing would leave the budget optimistic.
+ */
+function chosenReading(id: WritableTermId, outcome: AllanOutcome, method: TermMethod): { t: NoiseTermRow; note?: string } {
+  const terms = outcome.result.analysis.terms;
+  const t = terms.find((r) => r.id === id && r.method === method)!;
+  if (!t.upperBound) return { t };
+  const fit = terms.find((r) => r.id === id && r.method === 'fit');
+  if (!fit || fit.atZero || fit.notSignificant) return { t };
+  return { t: fit, note: `the slope read-off saw no slope (only an upper bound), so the whole-curve fit's value ${valueText(fit.value, fit.unit)} was written` };
+}
+
 function slopedCandidate(id: WritableTermId, outcome: AllanOutcome, method: TermMethod, sensorKind: SensorKind, head: string): TermCandidate {
-  const t = outcome.result.analysis.terms.find((r) => r.id === id && r.method === method)!;
+  const { t, note } = chosenReading(id, outcome, method);
+  const rowHead = note ? `${head}; slope not seen, whole-curve fit used` : head;
   const label = t.name;
   if (t.atZero) return { id, label, refusal: 'the fit held it at zero: the curve shows none of it' };
-  const caution = t.upperBound ? 'only an upper bound: its slope was not seen' : t.extrapolated ? 'read from an extrapolated line' : undefined;
-  const planned = slopedFields(id, t, head);
+  const caution = t.upperBound ? 'only an upper bound: its slope was not seen, and the whole-curve fit does not find it significant either'
+    : t.notSignificant ? 'not significant: the fit puts it within two standard errors of zero'
+    : t.extrapolated ? 'read from an extrapolated line' : undefined;
+  const planned = slopedFields(id, t, rowHead);
   let fields = planned.fields;
   let refusal = rowRefusal(sensorKind, ROW_KINDS[id], fields.unit);
   if (refusal && id === 'random-walk' && !rowRefusal(sensorKind, 'white-noise', SENSOR_TERM_UNITS[outcome.result.kind].rateUnitSI)) {
-    fields = perSampleFields(t, outcome, head);
+    fields = perSampleFields(t, outcome, rowHead);
     refusal = undefined;
   }
   if (refusal) return { id, label, refusal };
-  return { id, label, caution, plan: { kind: ROW_KINDS[id], idStem: ID_STEMS[id], label, fields, sameSource: planned.sameSource } };
+  return { id, label, caution, ...(note && { note }), plan: { kind: ROW_KINDS[id], idStem: ID_STEMS[id], label, fields, sameSource: planned.sameSource } };
 }
 
 /**

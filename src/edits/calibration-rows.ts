@@ -56,12 +56,34 @@ export function calibrationCandidates(r: CalibrationReport, sensorKind: SensorKi
     fields: { value: cellNumber(r.scaleFactor.uncertainty), unit: 'ppm', provenance, assumed: false },
   };
   return [
-    { id: 'offset', label: offset.label, ...candidate(sensorKind, offset) },
+    { id: 'offset', label: offset.label, ...offsetCandidate(r, sensorKind, offset) },
     { id: 'scale-factor', label: scale.label, ...candidate(sensorKind, scale) },
   ];
+}
+
+/** A speed sensor that takes no offset row (a wheel-speed sensor) is told why, with the fitted value. */
+function offsetCandidate(r: CalibrationReport, sensorKind: SensorKind, plan: RowPlan): { plan?: RowPlan; refusal?: string } {
+  const c = candidate(sensorKind, plan);
+  return c.refusal && r.offset.unitSI === 'm/s' ? { refusal: wheelOffsetReason(r) } : c;
 }
 
 function candidate(sensorKind: SensorKind, plan: RowPlan): { plan?: RowPlan; refusal?: string } {
   const refusal = rowRefusal(sensorKind, plan.kind, plan.fields.unit);
   return refusal ? { refusal } : { plan };
+}
+
+/**
+ * Why a wheel-speed sensor gets no offset row, with the fitted value kept in
+ * the message (it is also in the scale-factor row's provenance). A wheel
+ * encoder counts turns: a wheel that stands still reads exactly zero, so its
+ * error is a scale factor (the rolling radius) and noise while moving, with
+ * no additive bias (common practice, no source; the planar model's speed
+ * error, docs/planar-model.md §3). An offset clearly above its uncertainty
+ * comes from the truth reference or a time shift between the two columns.
+ */
+export function wheelOffsetReason(r: CalibrationReport): string {
+  const clear = Math.abs(r.offset.value) > 2 * r.offset.uncertainty;
+  return `a wheel-speed sensor counts wheel turns and reads zero at rest, so the model has no speed offset; the fitted offset ` +
+    `${est(r.offset.value, r.offset.uncertainty, r.offset.unit)} is kept in the scale-factor row's provenance` +
+    (clear ? ` and is more than twice its uncertainty: check the truth column and the time alignment of the two columns` : ' and is consistent with zero');
 }

@@ -61,7 +61,10 @@ export interface JsonResult {
   title: string;
   caution: string;
   mission: {
-    duration_s: number; step_s: number; states: string[];
+    duration_s: number; step_s: number;
+    /** Steps between the series' points (1 keeps every step); verdicts are evaluated at every step regardless. */
+    record_every: number;
+    states: string[];
     sources: { id: string; sensor: string; kind: string; provenance?: string; assumed: boolean }[];
   };
   series: Record<string, number[]>;
@@ -89,7 +92,7 @@ export function buildJsonResult(result: BudgetResult, title: string, every = 1):
   return {
     format: 'sigma-ledger-result', formatVersion: 1, title, caution: CAUTION,
     mission: {
-      duration_s: result.mission.durationS, step_s: result.trajectory.stepS,
+      duration_s: result.mission.durationS, step_s: result.trajectory.stepS, record_every: result.recordEvery * Math.max(1, Math.floor(every)),
       states: result.model.states.map((s) => s.name),
       sources: result.model.sources.map((s) => ({ id: s.id, sensor: s.sensorId, kind: s.kind, provenance: s.provenance, assumed: s.assumed })),
     },

@@ -70,11 +70,16 @@ export function allocateHistory(layout: RunLayout, steps: number): { believed: C
   const { truth, filter, plan } = layout;
   const S = plan.denseCount > 1 || plan.vectors > 0 ? truth.sources.length : 0;
   const calibration = filter.states.flatMap((s, i) => (s.calibration ? [i] : []));
-  const empty = (rows: number): CovarianceHistory => ({
-    steps, sourceCount: rows - 1, entries: entries(rows * steps), calibrationStates: calibration,
-    calibrationSigma: calibration.map(() => new Float64Array(steps)), finalCovariance: new Float64Array(0),
-    finalSourceCovariances: [], measurementCounts: {}, issues: [],
-  });
+  const empty = (rows: number): CovarianceHistory => {
+    const e = entries(rows * steps);
+    // Every step is recorded: the total's entries are row 0 of the recorded ones (views, no copy).
+    const totalEntries = Object.fromEntries(Object.entries(e).map(([k, a]) => [k, (a as Float64Array).subarray(0, steps)])) as unknown as typeof e;
+    return {
+      steps, recordedSteps: Int32Array.from({ length: steps }, (_, k) => k), totalEntries, sourceCount: rows - 1, entries: e,
+      calibrationStates: calibration, calibrationSigma: calibration.map(() => new Float64Array(steps)), finalCovariance: new Float64Array(0),
+      finalSourceCovariances: [], measurementCounts: {}, issues: [],
+    };
+  };
   return { believed: empty(1), actual: empty(S + 1) };
 }
 

@@ -49,6 +49,14 @@ describe('sigma-ledger allan', () => {
     expect(Math.abs(arw.value / 0.2 - 1)).toBeLessThan(0.15);
   });
 
+  it('finds a time column called time without --time-column, and prints its rate as 100', async () => {
+    const file = join(dir, 'timed.csv');
+    writeFileSync(file, ['time,rate_dps', ...Array.from({ length: 400 }, (_, k) => `${(k / 100).toFixed(2)},${Math.sin(k * 7.1) * 1e-3}`)].join('\n') + '\n');
+    const r = await run({ file, column: 'rate_dps', unit: 'deg/s', json: true });
+    expect(r.code).toBe(0);
+    expect(r.out).toMatch(/"rateHz":100,/);
+  });
+
   it('prints the table and the terms as text', async () => {
     const r = await run({ ...base, json: false });
     expect(r.code).toBe(0);
@@ -79,7 +87,7 @@ describe('sigma-ledger allan', () => {
       [{ column: 'rate_x' }, /there is no column "rate_x" \(named by --column\); the columns found are "t_s", "rate_z_dps", "board_temp"/],
       [{ file: notNumeric, column: 'v', timeColumn: 't' }, /bad\.csv line 4, column "v": "oops" is not a number/],
       [{ rateHz: 100 }, /--rate: give either --time-column .* or --rate, not both/],
-      [{ timeColumn: undefined }, /--rate: the log needs a time column/],
+      [{ timeColumn: undefined }, /line 1 \(header\): no time column: none is called "time", "t", "time_s"; name it \(--time-column\) or give the sample rate/],
       [{ unit: 'm/s²', kind: 'gyro' }, /--unit: a gyro log needs an angular rate/],
       [{ unit: 'parsec' }, /--unit: unknown unit/],
       [{ timeUnit: 'deg' }, /--time-unit: 'deg' is an angle; expected a time/],

@@ -7,6 +7,8 @@
  * sources) under 100 ms, growing linearly with mission length and with the
  * number of sources.
  */
+import { pathToFileURL } from 'node:url';
+import { resolve } from 'node:path';
 import { computeBudget } from '../../src/pipeline';
 import type { BudgetInput } from '../../src/inputs/budget-input';
 import { scenarioR2 } from '../fixtures/reference-scenarios';
@@ -30,8 +32,18 @@ function withExtraSources(extra: number): BudgetInput {
 }
 
 const r2 = scenarioR2();
-const base = medianMs(() => computeBudget(r2), 21, 1);
-console.log(`R2 full recompute (6,000 steps, 11 states, 14 sources, contributions): median ${base.toFixed(1)} ms (target < 100 ms)`);
+// BASELINE_SRC=<older checkout>/src times that code's pipeline beside this one, alternating runs in this process.
+const baseline = process.env.BASELINE_SRC;
+const oldPipeline = baseline ? await import(pathToFileURL(resolve(baseline, 'pipeline.ts')).href) : undefined;
+const newTimes: number[] = [], oldTimes: number[] = [];
+for (let i = 0; i < 23; i++) {
+  newTimes.push(medianMs(() => computeBudget(r2), 1, i === 0 ? 2 : 0));
+  if (oldPipeline) oldTimes.push(medianMs(() => oldPipeline.computeBudget(r2), 1, i === 0 ? 2 : 0));
+}
+const median = (a: number[]) => [...a].sort((x, y) => x - y)[Math.floor(a.length / 2)];
+const base = median(newTimes);
+const vsOld = oldPipeline ? `; old code ${median(oldTimes).toFixed(1)} ms, new/old ${(base / median(oldTimes)).toFixed(2)}` : '';
+console.log(`R2 full recompute (6,000 steps, 11 states, 14 sources, contributions): median ${base.toFixed(1)} ms (target < 30 ms)${vsOld}`);
 
 const lengthPoints: [number, number][] = [0.5, 1, 2, 4].map((f) => {
   const b = scaledMission(f);

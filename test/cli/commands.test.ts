@@ -24,6 +24,8 @@ interface JsonResult {
   series: Record<string, number[]>;
   contributions: Record<string, Record<string, number[]>>;
   requirements: { id: string; verdict: string; margin: number; outages: { start_s: number; end_s: number; timeToExceed_s: number | null }[] }[];
+  checkpoints: { id: string; t_s: number }[];
+  mission: { record_every: number };
 }
 
 describe('run', () => {
@@ -99,10 +101,16 @@ describe('run --json', () => {
     expect(times.some((t) => typeof t === 'number')).toBe(true);
   });
 
-  it('keeps every tenth step and the last one with --every 10', () => {
+  it('keeps every tenth step, the checkpoints and the last one with --every 10, with the same verdicts', () => {
     const t = full.series.t_s;
-    const kept = t.filter((_, k) => k % 10 === 0 || k === t.length - 1);
+    const checkpointTimes = full.checkpoints.map((c) => c.t_s);
+    const kept = t.filter((tS, k) => k % 10 === 0 || k === t.length - 1 || checkpointTimes.includes(tS));
+    expect(checkpointTimes.some((tS) => t.indexOf(tS) % 10 !== 0)).toBe(true);
     expect(thinned.series.t_s).toEqual(kept);
+    expect(thinned.mission.record_every).toBe(10);
+    // Verdicts, margins and times-to-exceed are evaluated at every step, never on the thinned series.
+    expect(thinned.requirements).toEqual(full.requirements);
+    expect(thinned.checkpoints).toEqual(full.checkpoints);
     for (const key of Object.values(SIGMA_SERIES)) expect(thinned.series[key]).toHaveLength(kept.length);
     for (const rows of Object.values(thinned.contributions)) {
       for (const row of Object.values(rows)) expect(row).toHaveLength(kept.length);

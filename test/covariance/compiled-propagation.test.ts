@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { genericKernel, propagationKernel } from '../../src/covariance/compiled-propagation';
+import { compile, genericKernel, propagationKernel, type KernelForm } from '../../src/covariance/compiled-propagation';
 import { reachability, toSparseRows } from '../../src/covariance/sparse-rows';
 import { seededRandom } from '../fixtures/seeded-random';
 
@@ -24,6 +24,27 @@ describe('the generated propagation kernel', () => {
           expect(generated[i * n + j]).toBeCloseTo(dense, 10);
           expect(generated[i * n + j] === generic[i * n + j], "bitwise equal up to the sign of zero").toBe(true);
         }
+      }
+    }
+  });
+
+  it('gives the generic loop\'s numbers bit for bit in every generated form, past the size where one function stops being optimised', () => {
+    const uniform = seededRandom(11);
+    const rand = () => uniform() - 0.5;
+    for (const n of [5, 12, 31, 45]) {
+      // A sparse Φ like the models': the diagonal plus a few couplings.
+      const phiDense = new Float64Array(n * n).map((_, e) => (e % (n + 1) === 0 || uniform() < 0.06 ? rand() : 0));
+      const phi = toSparseRows(phiDense, n, new Uint8Array(n * n).fill(1));
+      const b = new Float64Array(n * n).map(() => rand());
+      const x = new Float64Array(n * n);
+      for (let i = 0; i < n; i++) for (let j = 0; j < n; j++) for (let k = 0; k < n; k++) x[i * n + j] += b[i * n + k] * b[j * n + k];
+      const generic = x.slice();
+      genericKernel(phi)(generic, 0, phi.val, new Float64Array(n * n));
+      for (const form of ['unrolled', 'blocked', 'row-loop'] as KernelForm[]) {
+        const out = x.slice();
+        compile(phi, form)!(out, 0, phi.val, new Float64Array(n * n));
+        const differing = out.filter((v, e) => v !== generic[e]).length;
+        expect(differing, `${form} at n = ${n}`).toBe(0);
       }
     }
   });
