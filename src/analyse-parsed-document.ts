@@ -69,7 +69,8 @@ export function analyseParsedDocument(doc: BudgetDocument, notes: string[], opti
   try {
     options.beforeCompute?.(sheet.input);
     const budget = computeBudget(sheet.input, { contributions: options.contributions, every: options.report ? options.report.every : undefined });
-    const report = options.report === false ? undefined : buildJsonResult(budget, title, reportEvery(budget, options.report));
+    // The engine already recorded every recordEvery-th step: thin the report only by what is left of the stride asked for.
+    const report = options.report === false ? undefined : buildJsonResult(budget, title, Math.max(1, Math.ceil(reportEvery(budget, options.report) / budget.recordEvery)));
     return { ...base, budget, ...(report && { report }) };
   } catch (e) {
     if (!(e instanceof SigmaLedgerError)) throw e;

@@ -5,7 +5,7 @@ import { loadBudget, reportProblems, throwIfBlocked } from './load-budget';
 
 /** Runs `check`; returns 0 for a valid budget, 2 otherwise. @throws SigmaLedgerError for bad input. */
 export function checkCommand(file: string, io: Io): number {
-  const loaded = loadBudget(file, { contributions: false, report: false });
+  const loaded = loadBudget(file, { report: false });
   if (reportProblems(loaded, io)) return EXIT.badInput;
   throwIfBlocked(loaded);
   io.out(`${loaded.fileName}: valid (${loaded.sheet.cellValues.size} cells evaluated)\n`);

@@ -4,7 +4,7 @@ import type { CliCommand } from './cli-command';
 import { COMMANDS } from './command-table';
 
 /** Exit codes as the help and the README describe them. */
-export const EXIT_CODES_TEXT = 'exit codes: 0 every requirement holds, 1 some requirement fails, 2 bad input';
+export const EXIT_CODES_TEXT = 'exit codes: 0 every requirement holds, 1 some requirement fails, 2 bad input,\n  3 internal error (a fault of sigma-ledger; add --debug for the stack trace)';
 
 /** `sigma-ledger help`: every command with its summary. */
 export function mainHelp(): string {

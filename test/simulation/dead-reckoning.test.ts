@@ -11,6 +11,9 @@ function errorFreeOrchard() {
   const input = structuredClone(loadBudget(fileURLToPath(new URL('../../budgets/orchard-rover.json', import.meta.url))).sheet.input!);
   for (const s of input.sensors) for (const row of s.sources) if (row.kind !== 'quantisation') row.value.value = 0;
   for (const s of input.sensors) s.sources = s.sources.filter((r) => r.kind !== 'quantisation');
+  // Dead reckoning alone: an aiding sensor with zero noise (R = 0) is refused, and aiding does not move the dead-reckoned path.
+  input.sensors = input.sensors.filter((s) => s.kind === 'yaw-gyro' || s.kind === 'wheel-speed');
+  input.requirements = [];
   input.mission.initialSigma = { position: { value: 0, unit: 'm' }, heading: { value: 0, unit: 'deg' } };
   const budget = computeBudget(input, { contributions: false });
   return planPlanarRuns(budget.model, budget.mission, budget.trajectory);

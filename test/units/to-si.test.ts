@@ -3,7 +3,7 @@ import { InputError } from '../../src/errors';
 import { convert, fromSI, toSI, unitFor } from '../../src/units/to-si';
 import { expectRelative } from './expect-relative';
 
-// Check values from the project's reference sheet (design/REFERENCES.md §2). The
+// Check values from the project's reference sheet (docs/checks.md §2). The
 // source of each is written beside it; "computed" means pure arithmetic.
 const CONVERSIONS: [number, string, string, number, number][] = [
   // value, from, to, expected, relative tolerance
