@@ -56,11 +56,12 @@ describe('the findings', () => {
   });
 
   it('shows why nothing was computed, with the document path, for a blocked view', async () => {
-    const blocked = editedView(ORCHARD, (d) => (d.sensors[2].outages![0].end = { value: 9999, unit: 's' }));
+    // A refused outage is now left out in place; a rate beyond the work limits still blocks the whole run.
+    const blocked = editedView(ORCHARD, (d) => (d.sensors[2].rate = { value: 1e9, unit: 'Hz' }));
     const el = await findingsOf(blocked);
     const note = shadow(el).querySelector('.blocked')!;
     expect(note.textContent).to.contain(blocked.blocked!.message);
-    expect(note.querySelector('code')!.textContent).to.equal('sensors[2].outages[0]');
+    expect(note.querySelector('code')!.textContent).to.equal('sensors[2].rate.value');
     expect(shadow(el).querySelector('sl-sigma-chart')).to.equal(null);
   });
 

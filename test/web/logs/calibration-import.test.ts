@@ -66,7 +66,7 @@ describe('the calibration import', () => {
     await pick(el, 'calibration-unit', 'm/s');
     await runAndWait(el);
     const view = deepQuery(el, 'sl-log-calibration');
-    expect(view.shadowRoot!.textContent).to.match(/not written: a wheel-speed sensor has no turn-on-bias row/);
+    expect(view.shadowRoot!.textContent).to.match(/not written: a wheel-speed sensor counts wheel turns and reads zero at rest/);
     view.shadowRoot!.querySelector<HTMLButtonElement>('#write')!.click();
     await settle(el);
     const wheel = store.document.sensors.find((s) => s.id === 'wheel')!.sources;
