@@ -16,7 +16,9 @@ const TEXT_FILE = /\.(ts|mjs|js|json|md|txt|html|css)$/;
 
 /** The design notes' names; spelled in pieces so that this file never cites one itself. */
 const NOTE_NAMES = ['ENGINE', 'INS', 'INS-REFERENCES', 'REFERENCES', 'DOCUMENT', 'STYLE', 'TOOLCHAIN'];
-const NOTE_CITATION = new RegExp(`(?<![\\w/.-])(?:${NOTE_NAMES.join('|')})(?:\\.md\\b| *§)|shared/design/`, 'g');
+/** The folder the notes were handed over in, also in pieces. */
+const NOTE_FOLDER = ['shared', 'design', ''].join('/');
+const NOTE_CITATION = new RegExp(`(?<![\\w/.-])(?:${NOTE_NAMES.join('|')})(?:\\.md\\b| *§)|${NOTE_FOLDER}`, 'g');
 /** `docs/page.md §N`, `docs/page.md` §§N-M, `docs/page.md §4.8–4.11`, with or without backticks. */
 const DOCS_CITATION = /docs\/([a-z0-9-]+)\.md`?(?:\s*(§§?)\s*([0-9]+(?:\.[0-9]+)*)(?:\s*[-–]\s*([0-9]+(?:\.[0-9]+)*))?)?/g;
 
