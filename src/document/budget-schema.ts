@@ -1,10 +1,11 @@
 /**
  * The published JSON Schema of budget documents (`budgets/budget.schema.json`),
  * imported rather than copied so editors and this code can never disagree,
- * and its compiled validator.
+ * and its validator, compiled ahead of time (budget-validator.generated.ts).
  */
-import Ajv, { type ValidateFunction } from 'ajv';
+import type { ValidateFunction } from 'ajv';
 import schemaJson from '../../budgets/budget.schema.json' with { type: 'json' };
+import { validate as precompiled } from './budget-validator.generated';
 
 /** A JSON Schema node, as far as this code walks it. */
 export interface SchemaNode {
@@ -20,18 +21,17 @@ export interface SchemaNode {
 /** The schema (draft-07). Its `properties` order is the order in which documents are written. */
 export const BUDGET_SCHEMA: SchemaNode & { definitions: Record<string, SchemaNode> } = schemaJson as never;
 
-let compiled: ValidateFunction | undefined;
-
 /**
- * The schema's validator, compiled on first use (a few milliseconds) and
- * kept. Stops at the first error; `verbose` keeps the failing schema node
- * so messages can quote its description.
- * @throws Error only if the schema file itself is broken (a test guards this).
+ * The schema's validator: ajv's standalone code, generated from the schema by
+ * test/tools/write-budget-validator.mjs (`npm run schema`, `npm run build`), so
+ * nothing is compiled at run time (no start-up cost, no `new Function` for the
+ * page's Content-Security-Policy to allow). Stops at the first error;
+ * `verbose` keeps the failing schema node so messages can quote its
+ * description. test/document/budget-validator.test.ts checks that it is
+ * current and gives what ajv's runtime compilation gives.
  */
 export function budgetValidator(): ValidateFunction {
-  // Union types (a cell is a number or a formula text) are deliberate, so strict mode allows them.
-  compiled ??= new Ajv({ allowUnionTypes: true, verbose: true }).compile(BUDGET_SCHEMA);
-  return compiled;
+  return precompiled as ValidateFunction;
 }
 
 /** The schema node a `$ref` such as `#/definitions/quantity` points at, and its definition name. */
