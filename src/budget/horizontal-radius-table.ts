@@ -1,4 +1,5 @@
 import { radiusForProbability } from './horizontal-accuracy';
+import { PRECOMPUTED_COEFFICIENTS } from './horizontal-radius-coefficients';
 
 /**
  * Fast CEP and R95 for every output step. The exact radius (a root of a
@@ -11,15 +12,30 @@ import { radiusForProbability } from './horizontal-accuracy';
  * 2013, ch. 8). For CEP the convergence is slow (a singularity lies just
  * beyond s = 0): 40 nodes give 5e-7, 64 give 4e-9 and 128 give 6e-13
  * relative error against the exact radius (measured here, and tested).
+ *
+ * Building a table costs 128 exact radii, about 25 ms, which was a tenth of
+ * the command line's start-up; the tables for CEP and R95 are therefore
+ * computed ahead of time (horizontal-radius-coefficients.ts, written by
+ * test/tools/write-radius-coefficients.ts and checked against
+ * {@link chebyshevCoefficients} by test/budget/horizontal-radius-table.test.ts).
  */
-const NODES = 128;
+export const NODES = 128;
 
 const tables = new Map<number, Float64Array>();
 
-/** Chebyshev coefficients of the normalised radius for `probability` (Chebyshev points of the first kind). */
+/** The table for `probability`: computed ahead of time for CEP and R95, else on first use and kept. */
 function coefficients(probability: number): Float64Array {
-  const cached = tables.get(probability);
-  if (cached) return cached;
+  let table = tables.get(probability);
+  if (!table) {
+    const precomputed = PRECOMPUTED_COEFFICIENTS[String(probability)];
+    table = precomputed ? Float64Array.from(precomputed) : chebyshevCoefficients(probability);
+    tables.set(probability, table);
+  }
+  return table;
+}
+
+/** Chebyshev coefficients of the normalised radius for `probability` (Chebyshev points of the first kind). */
+export function chebyshevCoefficients(probability: number): Float64Array {
   const values = new Float64Array(NODES);
   for (let j = 0; j < NODES; j++) {
     const x = Math.cos((Math.PI * (j + 0.5)) / NODES);
@@ -32,7 +48,6 @@ function coefficients(probability: number): Float64Array {
     c[k] = (2 / NODES) * sum;
   }
   c[0] /= 2;
-  tables.set(probability, c);
   return c;
 }
 
