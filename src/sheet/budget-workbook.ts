@@ -15,7 +15,12 @@
  * 0.1 ms, so an edit plus a re-read is under 1 ms. A full one-shot
  * evaluation of an 18-cell document costs about 12 ms: the engine build
  * dominates, so keep one workbook per open document.
- * See test/sheet/workbook-cost.test.ts.
+ * See test/bench/workbook-bench.ts.
+ *
+ * A document without formulas needs no engine: its cells are their numbers.
+ * The engine is then built only when a formula is first set (the first
+ * build in a process costs about 80 ms of the command line's start-up:
+ * HyperFormula's parser and its string collator).
  */
 import { HyperFormula, type SimpleCellAddress, type SimpleCellRange } from 'hyperformula';
 import { InputError } from '../errors';
@@ -48,6 +53,11 @@ function contentProblem(content: unknown): string | undefined {
   return `must be a number or a formula starting with '=', got ${JSON.stringify(content) ?? String(content)}`;
 }
 
+/** True for a cell content the engine must evaluate: a formula text. */
+function isFormula(content: unknown): boolean {
+  return typeof content === 'string' && content.startsWith('=');
+}
+
 /** What the engine is given for a cell: the content, or an error in place of content it cannot take. */
 function engineContent(content: unknown): Cell {
   // An empty cell would read as 0 in formulas that use it; an error makes them fail visibly instead.
@@ -74,17 +84,18 @@ export class BudgetWorkbook {
   private readonly cells: SheetCell[];
   private readonly byPath = new Map<string, number>();
   private readonly nameProblems: Map<string, string>;
-  private readonly engine: HyperFormula;
-  private readonly sheetId: number;
+  /** The formula engine, built when the first formula appears (absent while every cell is a number). */
+  private engine?: HyperFormula;
+  private sheetId = 0;
 
   /**
-   * Builds the engine for a copy of `document` (the caller's object is not
-   * changed). Cell problems do not throw; they come back from
-   * {@link evaluate}. Throws nothing for a document that passed
-   * parseBudgetDocument.
+   * Holds a copy of `document` (the caller's object is not changed) and
+   * builds the formula engine if any cell has a formula. Cell problems do not
+   * throw; they come back from {@link evaluate}. Throws nothing for a
+   * document that passed parseBudgetDocument.
+   * @param options.engine `always` builds the engine even without formulas (tests compare both ways).
    */
-  constructor(document: BudgetDocument) {
-    registerUnitFunctions();
+  constructor(document: BudgetDocument, options: { engine?: 'always' | 'for-formulas' } = {}) {
     this.doc = JSON.parse(JSON.stringify(document)) as BudgetDocument;
     this.cells = listCells(this.doc);
     this.cells.forEach((c, row) => {
@@ -92,11 +103,19 @@ export class BudgetWorkbook {
       this.byPath.set(c.unitPath, row);
     });
     this.nameProblems = refusedNames(this.cells);
+    if (options.engine === 'always' || this.cells.some((c) => isFormula(c.quantity.value))) this.buildEngine();
+  }
+
+  /** Builds the engine from the cells as they are now. */
+  private buildEngine(): HyperFormula {
+    registerUnitFunctions();
     const named = this.cells.flatMap((c, row) =>
       c.location.name === undefined || this.nameProblems.has(c.location.path) ? [] : [{ name: c.location.name, expression: `=${SHEET_NAME}!$A$${row + 1}` }]);
     const sheet = this.cells.map((c) => [engineContent(c.quantity.value)]);
-    this.engine = HyperFormula.buildFromSheets({ [SHEET_NAME]: sheet }, engineConfig(sheet.length), named);
-    this.sheetId = this.engine.getSheetId(SHEET_NAME)!;
+    const engine = HyperFormula.buildFromSheets({ [SHEET_NAME]: sheet }, engineConfig(sheet.length), named);
+    this.engine = engine;
+    this.sheetId = engine.getSheetId(SHEET_NAME)!;
+    return engine;
   }
 
   /** A copy of the document with every edit made so far, for saving. */
@@ -118,7 +137,8 @@ export class BudgetWorkbook {
   setCell(path: string, content: Cell): void {
     const cell = this.cellAt(path, 'value');
     cell.quantity.value = content;
-    this.engine.setCellContents(this.address(path), [[engineContent(content)]]);
+    if (this.engine) this.engine.setCellContents(this.address(path), [[engineContent(content)]]);
+    else if (isFormula(content)) this.buildEngine();
   }
 
   /**
@@ -160,7 +180,7 @@ export class BudgetWorkbook {
 
   /** Releases the engine. The workbook must not be used afterwards. Throws nothing. */
   destroy(): void {
-    this.engine.destroy();
+    this.engine?.destroy();
   }
 
   private cellAt(path: string, part: 'value' | 'unit'): SheetCell {
@@ -180,6 +200,8 @@ export class BudgetWorkbook {
   private outcome(c: SheetCell, row: number): CellOutcome {
     const problem = contentProblem(c.quantity.value);
     if (problem) return { kind: 'content', message: problem };
+    // Without an engine every cell is a finite number (contentProblem passed it).
+    if (!this.engine) return { value: c.quantity.value as number };
     const addr = { sheet: this.sheetId, col: 0, row };
     const positions = this.engine.getCellPrecedents(addr).filter((p) => ('sheet' in p ? p.sheet : p.start.sheet) === this.sheetId);
     if (positions.length > 0) {
@@ -190,7 +212,8 @@ export class BudgetWorkbook {
   }
 
   private positionText(p: SimpleCellAddress | SimpleCellRange): string {
-    const text = 'sheet' in p ? this.engine.simpleCellAddressToString(p, this.sheetId) : this.engine.simpleCellRangeToString(p, this.sheetId);
+    const engine = this.engine!;
+    const text = 'sheet' in p ? engine.simpleCellAddressToString(p, this.sheetId) : engine.simpleCellRangeToString(p, this.sheetId);
     return text ?? 'a cell';
   }
 }
