@@ -4,20 +4,18 @@
  * styles). Everything loads from the page's own origin; no inline script,
  * no plugins, no base or form targets.
  *
- * 'unsafe-eval' stays for one reason: ajv compiles the budget schema's
- * validator with `new Function` when a file is opened or an autosave is
- * restored (src/document/budget-schema.ts). The generated covariance
- * kernels (src/covariance/compiled-propagation.ts) fall back to the generic
- * loop when `new Function` is refused, and HyperFormula's parser evaluates
- * nothing. Dropping 'unsafe-eval' needs the validator compiled ahead of time
- * (ajv's standalone code) from the schema, which is itself about to be
- * generated from the kind registries; see README.md.
+ * No 'unsafe-eval': the budget schema's validator is compiled ahead of time
+ * (ajv's standalone code, src/document/budget-validator.generated.ts), and
+ * HyperFormula's parser evaluates no strings. The generated covariance
+ * kernels (src/covariance/compiled-propagation.ts) run in the compute
+ * worker, whose policy comes with its own script (none from this meta tag);
+ * where `new Function` is refused they fall back to the generic loop.
  */
 import type { Plugin } from 'vite';
 
 export const CONTENT_SECURITY_POLICY = [
   "default-src 'self'",
-  "script-src 'self' 'unsafe-eval'",
+  "script-src 'self'",
   "worker-src 'self'",
   "style-src 'self'",
   // Style attributes only (lit templates set widths and colours inline); <style> elements stay refused.
