@@ -51,6 +51,7 @@ try {
   for (const worker of page.workers()) {
     const verdict = await worker.evaluate(() => {
       try {
+        // eslint-disable-next-line no-new-func -- the check is whether the worker's policy allows it.
         return new Function('return 1')() === 1 ? 'allowed' : 'refused';
       } catch {
         return 'refused';
