@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 
 /**
  * The version in the package's package.json, found by walking up from this
- * file (src/cli/ when run from source, dist/src/cli/ when compiled).
+ * file (src/cli/ from source, dist/src/cli/ compiled, dist/cli/ bundled).
  * @returns the version, or "unknown" if no package.json of sigma-ledger is found.
  */
 export function packageVersion(): string {

@@ -1,6 +1,6 @@
 #!/usr/bin/env node
 /**
- * The `sigma-ledger` command, compiled to dist/src/cli/sigma-ledger.js (the
+ * The `sigma-ledger` command, bundled into dist/cli/sigma-ledger.js (the
  * package's `bin`) so it starts under plain node. A reader that closes the
  * pipe early (`| head`) ends the command quietly instead of with an EPIPE
  * stack trace.
