@@ -43,7 +43,7 @@ export default {
       worker: { format: 'es' },
       optimizeDeps: {
         exclude: ['@web/test-runner-commands'],
-        include: ['lit', 'lit/decorators.js', 'lit/directives/live.js', 'lit/directives/if-defined.js', 'lit/directives/class-map.js', 'lit/directives/unsafe-svg.js', 'd3-array', 'chart.js', 'hyperformula', '@open-wc/testing', 'idb', 'ajv', 'ml-matrix', 'papaparse/papaparse.js'],
+        include: ['lit', 'lit/decorators.js', 'lit/directives/live.js', 'lit/directives/if-defined.js', 'lit/directives/class-map.js', 'lit/directives/unsafe-svg.js', 'd3-array', 'chart.js', 'hyperformula', '@open-wc/testing', 'idb', 'ajv', 'ajv/dist/runtime/ucs2length.js', 'ml-matrix', 'papaparse/papaparse.js'],
       },
     }),
   ],

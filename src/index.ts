@@ -97,3 +97,11 @@ export { ALLAN_SENSOR_KINDS, SENSOR_TERM_UNITS, type AllanSensorKind } from './a
 export { calibrationReport, checkCalibrationUnit, type CalibrationReport } from './calibration/calibration-report';
 export { fitOffsetAndScaleFactor } from './calibration/linear-calibration';
 export { checkResidualWhiteness } from './calibration/residual-whiteness';
+
+// The rest of what the page uses (web/ imports the engine only from this entry: test/web-imports.test.ts).
+export { QUANTITIES, quantitySpec, type QuantityId, type QuantitySpec } from './inputs/quantities';
+export { OPTION_FIELDS, optionFieldsOf, rowOptionFor, type RowOption } from './edits/row-options';
+export type { OptionField } from './sources/source-kind';
+export { markdownText, neutraliseCell, restoreCell } from './report/spreadsheet-safe';
+export { firstInvalidUtf8Byte, invalidUtf8Message } from './document/invalid-utf8';
+export type { FilterDesignJson } from './report/filter-design-json';

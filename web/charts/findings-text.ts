@@ -1,5 +1,5 @@
-import { formatSignificant } from '../../src/units';
-import { QUANTITIES } from '../../src/inputs/quantities';
+import { formatSignificant } from '../../src';
+import { QUANTITIES } from '../../src';
 import type { OutageHoldEntry, RequirementEntry } from './result-shapes';
 
 /** A value for the findings' texts and tables: three significant digits (the unit goes beside it). */

@@ -1,6 +1,6 @@
 import type { NoiseTrace, TracedEntry } from '../../src';
 import { formatSignificant, withUnit } from '../../src';
-import { markdownText, neutraliseCell } from '../../src/report/spreadsheet-safe';
+import { markdownText, neutraliseCell } from '../../src';
 
 /** A ledger value: four significant digits (the unit goes beside it). */
 export const ledgerNumber = (x: number) => formatSignificant(x, 4);

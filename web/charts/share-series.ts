@@ -1,5 +1,5 @@
-import type { JsonResult } from '../../src/report/json-result';
-import { quantitySpec, VARIANCE_QUANTITIES } from '../../src/inputs/quantities';
+import type { JsonResult } from '../../src';
+import { quantitySpec, VARIANCE_QUANTITIES } from '../../src';
 import { NEUTRAL_COLOUR, seriesColour } from '../styles/palette';
 import type { LineDataset } from './chart-controller';
 

@@ -1,6 +1,6 @@
-import type { ViewResult } from '../../src/report/view-result';
-import { convert } from '../../src/units';
-import { quantitySpec, type VarianceQuantity } from '../../src/inputs/quantities';
+import type { ViewResult } from '../../src';
+import { convert } from '../../src';
+import { quantitySpec, type VarianceQuantity } from '../../src';
 import { LIMIT_DASH, TOTAL_COLOUR, seriesColour } from '../styles/palette';
 import type { LineDataset } from './chart-controller';
 import { levelText, num, quantityText } from './findings-text';

@@ -1,5 +1,5 @@
 import { formatTickValues } from '../../src/index';
-import { formatSignificant } from '../../src/units';
+import { formatSignificant } from '../../src';
 
 /**
  * Log-axis tick label: over several decades (`crowded`) only at 1, 2 and 5

@@ -1,6 +1,6 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
-import type { FilterDesignJson } from '../../src/report/filter-design-json';
+import type { FilterDesignJson } from '../../src';
 import { num } from '../charts/findings-text';
 
 /**

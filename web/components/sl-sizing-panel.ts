@@ -2,7 +2,7 @@ import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property, state } from 'lit/decorators.js';
 import { unsafeSVG } from 'lit/directives/unsafe-svg.js';
 import { formatToTolerance, renderLineChartSvg, type BudgetDocument } from '../../src/index';
-import { formatSignificant } from '../../src/units';
+import { formatSignificant } from '../../src';
 import type { OutageAnswer, RowAnswer, SizingJob } from '../sizing/sizing-protocol';
 import { SizingRunner } from '../sizing/sizing-runner';
 import { sizingChart } from '../sizing/sizing-charts';

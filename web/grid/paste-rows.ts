@@ -13,7 +13,7 @@ import { cellText, readCellText } from '../../src';
 import { idProblem, isTaken, uniqueId } from '../../src';
 import { changeRowKind, fillRequired, newRow } from './row-edits';
 import { rowDimensions } from '../../src';
-import { neutraliseCell, restoreCell } from '../../src/report/spreadsheet-safe';
+import { neutraliseCell, restoreCell } from '../../src';
 
 /** The pasted columns, in order, as the hint in the grid names them. */
 export const PASTE_COLUMNS = ['id', 'kind', 'value', 'unit', 'correlation time', 'correlation time unit', 'provenance'] as const;

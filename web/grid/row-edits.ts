@@ -4,15 +4,15 @@
  * the fields that no longer apply removed, renames that rewrite formulas,
  * new and duplicated sensors.
  */
-import type { BudgetDocument, SensorEntry, SourceRow } from '../../src/document';
-import type { SensorKind, SourceKind } from '../../src/inputs/budget-input';
-import { unitDimension } from '../../src/units';
-import { uniqueId } from '../../src/edits/ids';
-import { renameRowReferences, renameSensorReferences } from '../../src/edits/references';
-import { defaultUnit, kindTakes, rowDimensions } from '../../src/edits/unit-choices';
-import { OPTION_FIELDS, optionFieldsOf } from '../../src/edits/row-options';
-import { SENSOR_KINDS } from '../../src/sensors/registry';
-import { SOURCE_KINDS } from '../../src/sources/registry';
+import type { BudgetDocument, SensorEntry, SourceRow } from '../../src';
+import type { SensorKind, SourceKind } from '../../src';
+import { unitDimension } from '../../src';
+import { uniqueId } from '../../src';
+import { renameRowReferences, renameSensorReferences } from '../../src';
+import { defaultUnit, kindTakes, rowDimensions } from '../../src';
+import { OPTION_FIELDS, optionFieldsOf } from '../../src';
+import { SENSOR_KINDS } from '../../src';
+import { SOURCE_KINDS } from '../../src';
 
 const BIAS_INSTABILITY_TAU = SOURCE_KINDS['bias-instability'].assumedCells!.find((c) => c.field === 'correlationTime')!;
 

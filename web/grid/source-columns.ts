@@ -4,12 +4,12 @@
  * beside a correlation time or rate only once there is one, and the one
  * model option that applies to the row's kind on its sensor.
  */
-import type { SensorKind } from '../../src/inputs/budget-input';
-import type { SourceRow } from '../../src/document';
-import { unitDimension } from '../../src/units';
-import { kindTakes } from '../../src/edits/unit-choices';
-import { rowOptionFor, type RowOption } from '../../src/edits/row-options';
-import type { OptionField } from '../../src/sources/source-kind';
+import type { SensorKind } from '../../src';
+import type { SourceRow } from '../../src';
+import { unitDimension } from '../../src';
+import { kindTakes } from '../../src';
+import { rowOptionFor, type RowOption } from '../../src';
+import type { OptionField } from '../../src';
 
 /** A grid column: its key, header text and header tooltip. */
 export interface SourceColumn {

@@ -1,5 +1,5 @@
 import type { LineChart } from '../../src/index';
-import { formatSignificant } from '../../src/units';
+import { formatSignificant } from '../../src';
 import type { OutageAnswer, RowAnswer } from './sizing-protocol';
 
 /**

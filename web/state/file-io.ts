@@ -1,6 +1,6 @@
 import { MAX_TEXT_CHARS, parseBudgetDocument, serializeBudgetDocument, type BudgetDocument } from '../../src';
-import { BudgetFileError } from '../../src/document/budget-file-error';
-import { firstInvalidUtf8Byte, invalidUtf8Message } from '../../src/document/invalid-utf8';
+import { BudgetFileError } from '../../src';
+import { firstInvalidUtf8Byte, invalidUtf8Message } from '../../src';
 
 /**
  * Reads a budget file the user picked or dropped: its size is checked

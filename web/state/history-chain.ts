@@ -5,7 +5,7 @@
  * Autosave stores each version once, so an edit writes one document and a
  * small index, however long the history (see autosave.ts).
  */
-import type { BudgetDocument } from '../../src/document';
+import type { BudgetDocument } from '../../src';
 import type { DocumentStore } from './document-store';
 
 /** What DocumentStore.snapshot() gives and restore() takes. */

@@ -4,8 +4,8 @@
  * reaches the engine: the version shown is fully validated as a budget
  * file would be, the others in the history get a shape check.
  */
-import { parseBudgetDocument, type BudgetDocument } from '../../src/document';
-import { SigmaLedgerError } from '../../src/errors';
+import { parseBudgetDocument, type BudgetDocument } from '../../src';
+import { SigmaLedgerError } from '../../src';
 
 /** True when `doc` passes every check a budget file gets (schema, ids, names). Throws nothing. */
 export function isValidBudget(doc: unknown): doc is BudgetDocument {
