@@ -41,6 +41,7 @@ export function writePart(path: string, part: SimulationPart): void {
  * @throws InputError naming the file and the field for anything else.
  */
 export function readPart(path: string): SimulationPart {
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- JSON of unknown shape: every field is checked below.
   let raw: any;
   try {
     raw = JSON.parse(readFileSync(path, 'utf8'));
@@ -56,6 +57,7 @@ export function readPart(path: string): SimulationPart {
   if (typeof raw.budget?.file !== 'string' || typeof raw.budget?.sha256 !== 'string') throw new InputError(`${path}: budget`, 'must name the budget file and its sha256');
   const fieldsPerStep = num(raw.fieldsPerStep, 'fieldsPerStep');
   if (!Array.isArray(raw.nodes)) throw new InputError(`${path}: nodes`, 'must be a list');
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- as raw above.
   const nodes = raw.nodes.map((n: any, i: number): BlockNode => {
     const bytes = Buffer.from(String(n?.sums ?? ''), 'base64');
     if (bytes.byteLength % 8 !== 0) throw new InputError(`${path}: nodes[${i}].sums`, 'is not a whole number of doubles');

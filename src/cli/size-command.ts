@@ -1,7 +1,6 @@
 /** `sigma-ledger size FILE --requirement ID --vary SENSOR.ROW`: the largest allowable value of one row. */
 import { sizeSource, type SizingResult } from '../budget/sizing';
 import { InputError } from '../errors';
-import type { BudgetInput } from '../inputs/budget-input';
 import { formatSignificant } from '../units';
 import { EXIT, type Io } from './commands';
 import { JSON_OPTION, textOption, UsageError, type CliCommand } from './cli-command';

@@ -65,7 +65,7 @@ export class RunRandom {
       this.hasSpare = false;
       return this.spare;
     }
-    let u = 0, v = 0, s = 0;
+    let u: number, v: number, s: number;
     do {
       // One signed 32-bit output per coordinate, uniform on [-1, 1) in steps of 2^-31: ample for
       // a normal draw, and half the generator calls of two 53-bit uniforms.

@@ -32,7 +32,7 @@ b.requirements = [{ id: 'pos95', quantity: 'horizontal', level: '95%', limit: { 
 const t0 = performance.now();
 const result = every > 0 ? pipeline.computeBudget(b, { every }) : pipeline.computeBudget(b);
 const engineMs = performance.now() - t0;
-let jsonChars = -1;
+let jsonChars: number;
 try {
   jsonChars = JSON.stringify(json.buildJsonResult(result, 'long', 1)).length;
 } catch {

@@ -20,6 +20,7 @@ describe('terminal escapes in what the CLI prints', { timeout: 60_000 }, () => {
   it('prints a hostile title and provenance with every control character escaped', async () => {
     const doc = patched({ title: `Cart${ESC}[2J\r\u009b31m`, 'sensors[0].sources[0].provenance': HOSTILE_PROVENANCE });
     const r = await runCli(['run', writeCase('escape-title.json', doc)]);
+    // eslint-disable-next-line no-control-regex -- the escape characters must not reach the terminal.
     expect(r.out + r.err).not.toMatch(/[\u001b\u009b\r]/);
     expect(r.out).toContain('Cart\\u001b[2J\\u000d\\u009b31m');
   });
