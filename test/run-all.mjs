@@ -1,5 +1,5 @@
 #!/usr/bin/env node
-// `npm test`: type checks, the Node tests (vitest), the packed package
+// `npm test`: type checks, lint, formatting, the Node tests (vitest), the packed package
 // installed and used elsewhere, the browser tests (web-test-runner in Debian's
 // Chromium), then one closing line "N passed, N failed" so CI's record shows
 // the count. Every stage's failures count there, including a stage that
@@ -15,6 +15,42 @@ for (const project of ['tsconfig.json', 'src/tsconfig.json', 'web/tsconfig.json'
   console.log(`\n== type check: ${project}`);
   if (run('npx', ['tsc', '-p', project]) === 0) passed += 1;
   else { ok = false; failed += 1; }
+}
+
+// Lint (typescript-eslint, eslint.config.js): each error is one failure.
+console.log('\n== lint (eslint)');
+const lint = spawnSync('npx', ['eslint', '.', '--format', 'json'], { encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 });
+try {
+  const files = JSON.parse(lint.stdout);
+  const errors = files.reduce((a, f) => a + f.errorCount, 0);
+  for (const f of files) {
+    for (const m of f.messages) console.log(`${f.filePath}:${m.line}:${m.column} ${m.ruleId ?? ''} ${m.message}`);
+  }
+  if (errors === 0) passed += 1;
+  else { ok = false; failed += errors; }
+  console.log(errors === 0 ? `eslint: ${files.length} files, no problem` : `eslint: ${errors} error(s)`);
+} catch {
+  process.stderr.write(lint.stderr ?? '');
+  ok = false;
+  failed += 1;
+}
+
+// Formatting (prettier --check, .prettierrc.json, print width 120): each unformatted file is one failure.
+// FORMAT_COUNTED stays false until the lead has formatted the merged tree once (then set it to true);
+// until then the stage lists the files that differ without counting them.
+const FORMAT_COUNTED = false;
+console.log(`\n== formatting (prettier --check)${FORMAT_COUNTED ? '' : ': not counted yet (FORMAT_COUNTED in test/run-all.mjs)'}`);
+const format = spawnSync('npx', ['prettier', '--list-different', '.'], { encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 });
+const unformatted = (format.stdout ?? '').split('\n').filter(Boolean);
+if (format.status !== 0 && unformatted.length === 0) {
+  process.stderr.write(format.stderr ?? '');
+  if (FORMAT_COUNTED) { ok = false; failed += 1; }
+} else if (unformatted.length === 0) {
+  console.log('prettier: every file is formatted');
+  if (FORMAT_COUNTED) passed += 1;
+} else {
+  console.log(`prettier: ${unformatted.length} file(s) not formatted${FORMAT_COUNTED ? ':' : ' (npm run format fixes them)'}`);
+  if (FORMAT_COUNTED) { for (const f of unformatted) console.log(`  ${f}`); ok = false; failed += unformatted.length; }
 }
 
 console.log('\n== node tests (vitest)');
