@@ -38,6 +38,16 @@ export interface CliCommand {
 /** `--json`, shared by the commands that can print JSON. */
 export const JSON_OPTION = { json: { type: 'boolean', default: false, help: 'print the result as JSON' } } as const;
 
+/** `--every N`, shared by the commands whose JSON has series over the mission's steps. */
+export const EVERY_OPTION = {
+  every: { type: 'string', value: 'N', help: 'keep every N-th step (and the last) in the --json series' },
+} as const;
+
+/** `--output OUT`, shared by the commands that write their result through writePieces (commands.ts). */
+export const OUTPUT_OPTION = {
+  output: { type: 'string', value: 'OUT', help: 'write to the file OUT instead of standard output' },
+} as const;
+
 /** Reads a string option. */
 export function textOption(values: ParsedValues, key: string): string | undefined {
   const v = values[key];

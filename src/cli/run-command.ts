@@ -10,7 +10,7 @@ import { resolveMission } from '../mission/resolve-mission';
 import { formatSummary } from '../report/text-summary';
 import { jsonChunks } from '../report/json-chunks';
 import { EXIT, writePieces, type Io } from './commands';
-import { JSON_OPTION, textOption, type CliCommand, type ParsedValues } from './cli-command';
+import { EVERY_OPTION, JSON_OPTION, OUTPUT_OPTION, textOption, type CliCommand, type ParsedValues } from './cli-command';
 import { loadBudget, reportProblems, throwIfBlocked } from './load-budget';
 import { integerOption, positiveOption } from './number-options';
 import { filterDesignReport } from './filter-design-report';
@@ -82,9 +82,9 @@ export const RUN_COMMAND: CliCommand = {
   ].join('\n'),
   options: {
     ...JSON_OPTION,
-    every: { type: 'string', value: 'N', help: 'keep every N-th step (and the last) in the --json series' },
+    ...EVERY_OPTION,
     significant: { type: 'string', value: 'N', help: 'significant digits of --json numbers, 1-17 (default: all, exact)' },
-    output: { type: 'string', value: 'OUT', help: 'write to the file OUT instead of standard output' },
+    ...OUTPUT_OPTION,
   },
   run: ([file], values: ParsedValues, io) => runCommand(file, {
     json: values.json === true,

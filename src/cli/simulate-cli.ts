@@ -1,14 +1,10 @@
 /** `simulate` and `merge` in the command table: their options and help (simulate-command.ts, merge-command.ts). */
 import { simulateCommand, simulateOptionsFromArgs } from './simulate-command';
 import { mergeCommand } from './merge-command';
-import { JSON_OPTION, textOption, type CliCommand, type CliOption } from './cli-command';
+import { EVERY_OPTION, JSON_OPTION, OUTPUT_OPTION, textOption, type CliCommand, type CliOption } from './cli-command';
 import { positiveOption } from './number-options';
 
-const OUTPUT_OPTIONS: Record<string, CliOption> = {
-  ...JSON_OPTION,
-  every: { type: 'string', value: 'N', help: 'keep every N-th step (and the last) in the --json series' },
-  output: { type: 'string', value: 'OUT', help: 'write to the file OUT instead of standard output' },
-};
+const OUTPUT_OPTIONS: Record<string, CliOption> = { ...JSON_OPTION, ...EVERY_OPTION, ...OUTPUT_OPTION };
 
 export const SIMULATE_COMMAND: CliCommand = {
   operands: ['FILE'],
