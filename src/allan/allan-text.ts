@@ -28,7 +28,7 @@ function slopeLine(t: NoiseTermRow): string {
 function fitLine(t: NoiseTermRow): string {
   const name = t.name.padEnd(22);
   if (t.atZero) return `${name}0 ${t.unit}   (held at zero; resolvable from about ${fmt(t.uncertainty)} ${t.unit})`;
-  if (t.notSignificant) return `${name}${fmt(t.value)} ± ${fmt(t.uncertainty)} ${t.unit}   (not significant: within two standard errors of zero, the curve does not show it)`;
+  if (t.notSignificant) return `${name}${fmt(t.value)} ± ${fmt(t.uncertainty)} ${t.unit}   (not significant: under 4 standard errors, so its squared value, the fitted term, is within 2 of zero)`;
   return `${name}${fmt(t.value)} ± ${fmt(t.uncertainty)} ${t.unit}`;
 }
 

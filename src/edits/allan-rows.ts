@@ -118,7 +118,7 @@ function slopedCandidate(id: WritableTermId, outcome: AllanOutcome, method: Term
   const label = t.name;
   if (t.atZero) return { id, label, refusal: 'the fit held it at zero: the curve shows none of it' };
   const caution = t.upperBound ? 'only an upper bound: its slope was not seen, and the whole-curve fit does not find it significant either'
-    : t.notSignificant ? 'not significant: the fit puts it within two standard errors of zero'
+    : t.notSignificant ? 'not significant: the fit puts its squared value within two standard errors of zero (the value under four)'
     : t.extrapolated ? 'read from an extrapolated line' : undefined;
   const planned = slopedFields(id, t, rowHead);
   let fields = planned.fields;
