@@ -47,11 +47,10 @@ const CASES: { name: string; doc: () => any; field: string; detail: RegExp }[] =
 
 describe('the work-limit corpus', { timeout: 60_000 }, () => {
   it.each(CASES)('refuses $name at $field before running', async ({ name, doc, field, detail }) => {
-    const started = Date.now();
+    // The message quotes the estimate (steps, measurements, states or memory), which only the
+    // check before the run writes; how fast the refusal comes is not a test's business (npm run bench).
     await expectCliRefusal(name, doc(), field, detail);
     expectViewRefusal(doc(), field);
-    // Refused from the estimate, not after running: well under the seconds the run would take.
-    expect(Date.now() - started).toBeLessThan(20_000);
   }, 60_000);
 
   it('lets ordinary rates through: two landmarks at 1, 10 and 100 Hz compute', () => {
