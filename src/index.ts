@@ -97,3 +97,7 @@ export { ALLAN_SENSOR_KINDS, SENSOR_TERM_UNITS, type AllanSensorKind } from './a
 export { calibrationReport, checkCalibrationUnit, type CalibrationReport } from './calibration/calibration-report';
 export { fitOffsetAndScaleFactor } from './calibration/linear-calibration';
 export { checkResidualWhiteness } from './calibration/residual-whiteness';
+
+// 3-D (inertial) budget documents: their workbook and evaluation to InertialBudgetInput.
+export { CellSheet, InertialWorkbook, evaluateInertialDocument } from './sheet';
+export type { InertialIndexMap, InertialSheetEvaluation, ReadCells } from './sheet';
