@@ -6,10 +6,10 @@
  * place like a cell error. Errors outside an item (the mission, the step, a
  * sensor's rate or lever arm) still stop the analysis.
  */
-import { SigmaLedgerError } from '../errors';
 import type { InertialBudgetDocument } from '../document/inertial-document';
 import type { InertialBudgetInput } from '../inertial/inertial-input';
-import type { CellError, CellLocation } from './cell-error';
+import type { CellLocation } from './cell-error';
+import { dropWhileRefused } from './drop-refused-items';
 import type { InertialIndexMap } from './build-inertial-input';
 import { inertialDocumentPathOf } from './inertial-input-paths';
 import type { InertialSheetEvaluation } from './inertial-workbook';
@@ -66,24 +66,10 @@ function dropItem(input: InertialBudgetInput, map: InertialIndexMap, path: strin
 export function dropRefusedInertialItems(
   doc: InertialBudgetDocument, sheet: InertialSheetEvaluation, probe: (input: InertialBudgetInput) => void,
 ): InertialSheetEvaluation {
-  if (!sheet.input) return sheet;
-  const input = JSON.parse(JSON.stringify(sheet.input)) as InertialBudgetInput;
-  const indexMap = JSON.parse(JSON.stringify(sheet.indexMap)) as InertialIndexMap;
-  const cellErrors: CellError[] = [...sheet.cellErrors];
-  const omitted = [...sheet.omitted];
-  for (;;) {
-    try {
-      probe(input);
-      break;
-    } catch (e) {
-      if (!(e instanceof SigmaLedgerError) || !e.path) break;
-      const docPath = inertialDocumentPathOf(e.path, indexMap);
-      const item = describe(doc, docPath);
-      if (!item || !dropItem(input, indexMap, e.path)) break;
-      cellErrors.push({ location: item.location, kind: /\.unit$/.test(docPath) ? 'unit' : 'out-of-range', message: e.message.slice(e.path.length + 2) });
-      omitted.push({ path: item.itemPath, what: item.what });
-    }
-  }
-  if (cellErrors.length === sheet.cellErrors.length) return sheet;
-  return { ...sheet, input, indexMap, cellErrors, omitted };
+  return dropWhileRefused(sheet, probe, (path, input, map) => {
+    const docPath = inertialDocumentPathOf(path, map);
+    const item = describe(doc, docPath);
+    if (!item || !dropItem(input, map, path)) return undefined;
+    return { docPath, ...item };
+  });
 }
