@@ -8,7 +8,8 @@ import { InputError } from '../errors';
 import type { ConfidenceLevel } from '../inputs/budget-input';
 import { INERTIAL_QUANTITIES, INERTIAL_REQUIREMENT_QUANTITIES } from '../inertial/inertial-quantities';
 import type { InertialBudgetInput } from '../inertial/inertial-input';
-import type { InertialBudget } from '../inertial/run-inertial';
+import { runInertialBudget, type InertialBudget } from '../inertial/run-inertial';
+import { resolveInertialMission } from '../inertial/inertial-mission';
 import type { DimensionName } from '../units';
 import { confidenceFactor1D } from './confidence';
 import { judgeRequirement, resolveRequirementList, type RequirementResult, type ResolvedRequirement } from './requirements';
@@ -66,4 +67,14 @@ export function evaluateInertialRequirements(reqs: ResolvedRequirement<string>[]
   // Spans outside a sensor's windows of use are not outages: no time-to-exceed for them.
   const streams = budget.model.streams.map((s) => ({ sensorId: s.sensorId, outages: s.outages.filter((o) => !o.gap) }));
   return reqs.map((r) => judgeRequirement(r, inertialLevelValues(budget, r.quantity, r.level), tS, streams, inertialLimitDimension(r.quantity)));
+}
+
+/**
+ * Every requirement's verdict of a 3-D input, from one run of the total
+ * covariance (no contributions): what sizing bisects on.
+ * @throws InputError naming the bad field.
+ */
+export function inertialRequirementsOf(input: InertialBudgetInput): RequirementResult<string>[] {
+  const reqs = resolveInertialRequirements(input, resolveInertialMission(input.mission).durationS);
+  return evaluateInertialRequirements(reqs, runInertialBudget(input, { contributions: false }));
 }
