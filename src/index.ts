@@ -105,3 +105,7 @@ export type { OptionField } from './sources/source-kind';
 export { markdownText, neutraliseCell, restoreCell } from './report/spreadsheet-safe';
 export { firstInvalidUtf8Byte, invalidUtf8Message } from './document/invalid-utf8';
 export type { FilterDesignJson } from './report/filter-design-json';
+
+// 3-D (inertial) budget documents: their workbook and evaluation to InertialBudgetInput.
+export { CellSheet, InertialWorkbook, evaluateInertialDocument } from './sheet';
+export type { InertialIndexMap, InertialSheetEvaluation, ReadCells } from './sheet';

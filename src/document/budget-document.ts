@@ -12,8 +12,12 @@ import type { ConfidenceLevel, QuantityName, SensorKind, SourceKind } from '../i
 /** The value of `format` in every budget document. */
 export const FORMAT_NAME = 'sigma-ledger-budget';
 
-/** The newest format version this code reads and writes. */
-export const FORMAT_VERSION = 1;
+/**
+ * The newest format version this code reads and writes. Version 2 added the
+ * model choice (`model`: planar or inertial) and the 3-D parts; a version 1
+ * file is a planar budget and migrates unchanged (src/document/format-version.ts).
+ */
+export const FORMAT_VERSION = 2;
 
 /** A value cell: a number, or a formula text starting with "=". */
 export type Cell = number | string;
@@ -152,11 +156,13 @@ export interface SizingRunEntry {
   note?: string;
 }
 
-/** A whole budget document of the current format version. */
+/** A whole planar budget document of the current format version (3-D budgets: InertialBudgetDocument). */
 export interface BudgetDocument {
   $schema?: string;
   format: typeof FORMAT_NAME;
   formatVersion: typeof FORMAT_VERSION;
+  /** The error model; absent means planar. */
+  model?: 'planar';
   title: string;
   description?: string;
   settings: { step: QuantityCell; level?: ConfidenceLevel };

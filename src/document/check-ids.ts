@@ -4,8 +4,13 @@
  * sensor id, and named values the formula engine would refuse.
  */
 import { BudgetFileError } from './budget-file-error';
-import type { BudgetDocument } from './budget-document';
+import type { AnyBudgetDocument } from './inertial-document';
 import { formulaNameProblem, nameKey, RESERVED_SENSOR_ID } from './names';
+
+/** The parts of a document of either model that carry ids. */
+type IdDocument = Pick<AnyBudgetDocument, 'values' | 'requirements' | 'checkpoints'> & {
+  sensors: { id: string; sources: { id: string }[]; landmarks?: { id: string }[] }[];
+};
 
 interface Named {
   id: string;
@@ -36,7 +41,7 @@ function idsOf(list: { id?: string }[] | undefined, base: string): Named[] {
 }
 
 /** Sensor ids, then each sensor's row and landmark ids, in document order. */
-function checkSensors(doc: BudgetDocument, fileName: string): void {
+function checkSensors(doc: IdDocument, fileName: string): void {
   const sensorId = uniqueIds('sensor ids', fileName);
   doc.sensors.forEach((s, i) => {
     if (nameKey(s.id) === RESERVED_SENSOR_ID) {
@@ -48,7 +53,7 @@ function checkSensors(doc: BudgetDocument, fileName: string): void {
   });
 }
 
-function checkValueNames(doc: BudgetDocument, fileName: string): void {
+function checkValueNames(doc: IdDocument, fileName: string): void {
   const names = Object.keys(doc.values ?? {}).map((name) => ({ id: name, path: `values.${name}` }));
   for (const { id, path } of names) {
     const problem = formulaNameProblem(id);
@@ -64,7 +69,7 @@ function checkValueNames(doc: BudgetDocument, fileName: string): void {
  * formulas.
  * @throws BudgetFileError naming the first offending id.
  */
-export function checkIds(doc: BudgetDocument, fileName: string): void {
+export function checkIds(doc: IdDocument, fileName: string): void {
   checkValueNames(doc, fileName);
   checkSensors(doc, fileName);
   requireUnique(idsOf(doc.requirements, 'requirements'), 'requirement ids', fileName);

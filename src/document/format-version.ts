@@ -19,8 +19,19 @@ export interface Migration {
 /** Migrations by the version they start from. */
 export type MigrationRegistry = ReadonlyMap<number, Migration>;
 
-/** The project's migrations. Version 1 is the first format, so there are none yet. */
-export const MIGRATIONS: MigrationRegistry = new Map();
+/**
+ * Version 1 to 2: version 1 knew only the planar model, so a version 1
+ * budget is a planar budget; it gains `"model": "planar"` and nothing else
+ * changes (test/document/format-migration.test.ts runs every example both ways).
+ */
+const PLANAR_MODEL_NAMED: Migration = {
+  from: 1,
+  note: 'the budget now names its error model ("model": "planar"); nothing else changed',
+  migrate: (raw) => ({ ...raw, model: 'planar' }),
+};
+
+/** The project's migrations, by the version they start from. */
+export const MIGRATIONS: MigrationRegistry = new Map([[1, PLANAR_MODEL_NAMED]]);
 
 /** A document brought to the current version, with a note per migration applied. */
 export interface MigratedJson {

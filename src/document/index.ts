@@ -23,7 +23,23 @@ export {
 export { BudgetFileError } from './budget-file-error';
 export { BUDGET_SCHEMA, budgetValidator } from './budget-schema';
 export { MIGRATIONS, migrateToCurrent, type MigratedJson, type Migration, type MigrationRegistry } from './format-version';
-export { formulaNameProblem, INITIAL_POSE_NAMES, nameKey, RESERVED_SENSOR_ID, rowCellName } from './names';
-export { parseBudgetDocument, type ParseOptions, type ParsedBudget } from './parse-budget-document';
+export { formulaNameProblem, INERTIAL_START_NAMES, INITIAL_POSE_NAMES, nameKey, RESERVED_SENSOR_ID, rowCellName } from './names';
+export { parseAnyBudgetDocument, parseBudgetDocument, type ParseOptions, type ParsedBudget } from './parse-budget-document';
 export { MAX_DEPTH, MAX_TEXT_CHARS, readJson } from './read-json';
 export { serializeBudgetDocument } from './serialize-budget-document';
+export {
+  IMU_SENSOR_KIND,
+  INERTIAL_SENSOR_KINDS,
+  isInertialDocument,
+  type AnyBudgetDocument,
+  type BudgetModel,
+  type InertialBudgetDocument,
+  type InertialMissionEntry,
+  type InertialRequirementEntry,
+  type InertialRow,
+  type InertialSegmentEntry,
+  type InertialSensorEntry,
+  type InertialSensorKind,
+  type InitialSigmaSource,
+} from './inertial-document';
+export { checkModelKeys } from './model-keys';

@@ -8,13 +8,16 @@
  * - a row's magnitude is its full id: `gyro.arw`;
  * - a row's other cells add the field: `gyro.bi.correlationTime`, `gyro.lsb.rate`,
  *   and the filter's tuned values `gyro.bi.tuning.value`, `gyro.bi.tuning.correlationTime`;
- * - the start-pose sources are `mission.initialPosition` and `mission.initialHeading`.
+ * - the start-pose sources are `mission.initialPosition` and `mission.initialHeading`;
+ *   3-D budgets add `mission.initialVelocity`, `mission.initialTilt`, and the vertical
+ *   parts `mission.initialPosition.vertical`, `mission.initialVelocity.vertical`;
+ * - a 3-D GNSS row's vertical sigma is `gnss.white.vertical`.
  * Named values have no dots and sensor ids cannot be "mission", so these
  * never collide. Other cells (segments, requirements, ...) have no names.
  */
 
 /** A row's cells that formulas can name; `tuning.*` are the filter's values (`gyro.bi.tuning.value`). */
-export type RowCellField = 'value' | 'correlationTime' | 'rate' | 'tuning.value' | 'tuning.correlationTime';
+export type RowCellField = 'value' | 'correlationTime' | 'rate' | 'tuning.value' | 'tuning.correlationTime' | 'vertical';
 
 /** Name of a row cell: its full id for the magnitude, plus the field for the others. */
 export function rowCellName(sensorId: string, rowId: string, field: RowCellField): string {
@@ -24,6 +27,14 @@ export function rowCellName(sensorId: string, rowId: string, field: RowCellField
 /** Names of the two start-pose sources, which are also their source ids. */
 export const INITIAL_POSE_NAMES = {
   initialPosition: 'mission.initialPosition',
+  initialHeading: 'mission.initialHeading',
+} as const;
+
+/** Names of the 3-D budget's start sources (docs/inertial-model.md §3), which are also their source ids. */
+export const INERTIAL_START_NAMES = {
+  initialPosition: 'mission.initialPosition',
+  initialVelocity: 'mission.initialVelocity',
+  initialTilt: 'mission.initialTilt',
   initialHeading: 'mission.initialHeading',
 } as const;
 

@@ -9,3 +9,4 @@ export { runInertialBudget, type InertialBudget, type InertialRunOptions, type I
 export { INERTIAL_QUANTITIES, type InertialQuantity } from './inertial-quantities';
 export { sphericalErrorProbableM, probabilityInsideSphere } from './sphere-probability';
 export type { InertialModel, InertialSource, InertialState } from './inertial-model';
+export { AIDING_KIND_NAMES, LEVER_ARM_KINDS, VERTICAL_SIGMA_KINDS, WINDOW_KINDS } from './inertial-input';

@@ -3,7 +3,7 @@
  * 3-D budget, every number with the unit it was written in. Plain JSON-safe
  * data, like the planar BudgetInput.
  */
-import type { OutageInput, Quantity, SegmentInput, SourceInput } from '../inputs/budget-input';
+import type { CheckpointInput, ConfidenceLevel, OutageInput, Quantity, RequirementInput, SegmentInput, SourceInput } from '../inputs/budget-input';
 
 /** How the vehicle's attitude follows the path (docs/inertial-model.md §2). */
 export type AttitudeRule = 'level' | 'banked' | 'ground';
@@ -48,9 +48,26 @@ export interface ImuInput {
   rows: ImuRowInput[];
 }
 
-/** Aiding sensors of the inertial model (docs/inertial-model.md §5). */
-export type AidingKind =
-  | 'gnss-position' | 'gnss-velocity' | 'barometer' | 'heading-aid' | 'zero-velocity' | 'motion-constraint' | 'odometer';
+/** Aiding sensors of the inertial model (docs/inertial-model.md §5), in the order documents and the page list them. */
+export const AIDING_KIND_NAMES = [
+  'gnss-position', 'gnss-velocity', 'barometer', 'heading-aid', 'zero-velocity', 'motion-constraint', 'odometer',
+] as const;
+
+/** An aiding sensor kind of the inertial model. */
+export type AidingKind = (typeof AIDING_KIND_NAMES)[number];
+
+/** The aiding kinds that take an antenna lever arm (docs/inertial-model.md §5). */
+export const LEVER_ARM_KINDS: readonly AidingKind[] = ['gnss-position'];
+
+/**
+ * The aiding kinds that may list `windows`, the spans in which they are used
+ * (a zero-velocity update at declared stops only); without windows they are
+ * used wherever their motion condition holds (docs/inertial-model.md §5).
+ */
+export const WINDOW_KINDS: readonly AidingKind[] = ['zero-velocity'];
+
+/** The aiding kinds whose rows give a horizontal sigma and a vertical one. */
+export const VERTICAL_SIGMA_KINDS: readonly AidingKind[] = ['gnss-position', 'gnss-velocity'];
 
 /** One aiding row: white noise, a bias (random constant), multipath or a scale factor. */
 export interface AidingRowInput {
@@ -73,8 +90,15 @@ export interface AidingInput {
   rate: Quantity;
   rows: AidingRowInput[];
   outages?: OutageInput[];
+  /** Zero-velocity sensors: the spans (half-open) in which the update is used; each must lie inside a stop. Omitted: every stop. */
+  windows?: OutageInput[];
   /** Antenna position in the body frame (x forward, y right, z down), a known setting. */
   leverArm?: { x: Quantity; y: Quantity; z: Quantity };
+}
+
+/** A limit on a 3-D quantity: an id of INERTIAL_REQUIREMENT_QUANTITIES (src/inertial/inertial-quantities.ts). */
+export interface InertialRequirementInput extends Omit<RequirementInput, 'quantity'> {
+  quantity: string;
 }
 
 /** The whole evaluated 3-D budget. */
@@ -83,4 +107,9 @@ export interface InertialBudgetInput {
   imu: ImuInput;
   aiding: AidingInput[];
   step: Quantity;
+  /** Read by the requirement code after the run (src/budget/), not by runInertialBudget. */
+  requirements?: InertialRequirementInput[];
+  checkpoints?: CheckpointInput[];
+  /** Level of the budget tables (default 1sigma). */
+  reportLevel?: ConfidenceLevel;
 }

@@ -60,3 +60,10 @@ export const INERTIAL_QUANTITIES: readonly InertialQuantity[] = [
     variance: (p, r) => form(p, ATTITUDE, [Math.tan(r.pitchRad) * Math.cos(r.yawRad), Math.tan(r.pitchRad) * Math.sin(r.yawRad), 1]),
   },
 ];
+
+/**
+ * What a requirement of a 3-D budget may constrain: every quantity above by
+ * its id, and `horizontal` (DRMS, 2DRMS, R95 or CEP by the requirement's
+ * level, as in planar budgets). A new quantity above is a new choice here.
+ */
+export const INERTIAL_REQUIREMENT_QUANTITIES: readonly string[] = [...INERTIAL_QUANTITIES.map((q) => q.id), 'horizontal'];

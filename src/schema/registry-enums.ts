@@ -16,6 +16,11 @@ import { QUANTITY_NAMES } from '../inputs/quantities';
 import { SENSOR_KIND_NAMES, SENSOR_KINDS } from '../sensors/registry';
 import { SOURCE_KIND_NAMES, SOURCE_KINDS } from '../sources/registry';
 import type { OptionField, RowOptionSpec } from '../sources/source-kind';
+import { INERTIAL_SENSOR_KINDS } from '../document/inertial-document';
+import { INERTIAL_REQUIREMENT_QUANTITIES } from '../inertial/inertial-quantities';
+
+/** Both models' values, planar first, each once (the schema describes both; src/document/model-keys.ts tells them apart). */
+const bothModels = (planar: readonly string[], inertial: readonly string[]) => [...new Set([...planar, ...inertial])];
 
 /** One generated enum: where it sits in the schema and its values. */
 export interface RegistryEnum {
@@ -37,10 +42,10 @@ export function registryEnums(): RegistryEnum[] {
   const options: OptionField[] = ['biasForm', 'densitySides', 'quantum', 'multipathModel', 'component'];
   return [
     { definition: 'settings', property: 'level', values: LEVELS },
-    { definition: 'sensor', property: 'kind', values: SENSOR_KIND_NAMES },
+    { definition: 'sensor', property: 'kind', values: bothModels(SENSOR_KIND_NAMES, INERTIAL_SENSOR_KINDS) },
     { definition: 'source', property: 'kind', values: SOURCE_KIND_NAMES },
     ...options.map((field) => ({ definition: 'source', property: field, values: optionChoices(field) })),
-    { definition: 'requirement', property: 'quantity', values: QUANTITY_NAMES },
+    { definition: 'requirement', property: 'quantity', values: bothModels(QUANTITY_NAMES, INERTIAL_REQUIREMENT_QUANTITIES) },
     { definition: 'requirement', property: 'level', values: LEVELS },
   ];
 }

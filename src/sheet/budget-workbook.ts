@@ -25,10 +25,12 @@
 import { HyperFormula, type SimpleCellAddress, type SimpleCellRange } from 'hyperformula';
 import { InputError } from '../errors';
 import type { BudgetDocument, Cell } from '../document/budget-document';
+import type { AnyBudgetDocument } from '../document/inertial-document';
 import { formulaNameProblem, nameKey } from '../document/names';
 import { buildBudgetInput } from './build-input';
 import type { CellError } from './cell-error';
 import { listCells, type SheetCell } from './cell-list';
+import type { CellLookup } from './cell-reader';
 import { isFailure, outcomeOf, type CellOutcome } from './cell-outcome';
 import { explainDependencies } from './dependencies';
 import { formulaProblem } from './formula-screen';
@@ -78,9 +80,21 @@ function refusedNames(cells: SheetCell[]): Map<string, string> {
   return refused;
 }
 
-/** An editable, evaluable budget. Structural edits (adding a row, renaming an id) need a new workbook. */
-export class BudgetWorkbook {
-  private readonly doc: BudgetDocument;
+/** Every value cell read once: errors in document order, good numbers by path, and the lookup the input builders take. */
+export interface ReadCells {
+  cellErrors: CellError[];
+  cellValues: Map<string, number>;
+  /** The number of a value cell, undefined when the cell or its unit failed. */
+  lookup: CellLookup;
+}
+
+/**
+ * The cells of a document of either model in a HyperFormula engine: the part
+ * of a workbook that does not depend on the model. Structural edits (adding
+ * a row, renaming an id) need a new one.
+ */
+export class CellSheet<D extends AnyBudgetDocument> {
+  protected readonly doc: D;
   private readonly cells: SheetCell[];
   private readonly byPath = new Map<string, number>();
   private readonly nameProblems: Map<string, string>;
@@ -89,15 +103,15 @@ export class BudgetWorkbook {
   private sheetId = 0;
 
   /**
-   * Holds a copy of `document` (the caller's object is not changed) and
-   * builds the formula engine if any cell has a formula. Cell problems do not
-   * throw; they come back from {@link evaluate}. Throws nothing for a
-   * document that passed parseBudgetDocument.
+   * Holds a copy of `document` (the caller's object is not changed), with
+   * the cells `list` finds in it, and builds the formula engine if any cell
+   * has a formula. Cell problems do not throw; they come back from
+   * {@link readCells}. Throws nothing for a document that passed the parser.
    * @param options.engine `always` builds the engine even without formulas (tests compare both ways).
    */
-  constructor(document: BudgetDocument, options: { engine?: 'always' | 'for-formulas' } = {}) {
-    this.doc = JSON.parse(JSON.stringify(document)) as BudgetDocument;
-    this.cells = listCells(this.doc);
+  constructor(document: D, list: (doc: D) => SheetCell[], options: { engine?: 'always' | 'for-formulas' } = {}) {
+    this.doc = JSON.parse(JSON.stringify(document)) as D;
+    this.cells = list(this.doc);
     this.cells.forEach((c, row) => {
       this.byPath.set(c.location.path, row);
       this.byPath.set(c.unitPath, row);
@@ -119,8 +133,8 @@ export class BudgetWorkbook {
   }
 
   /** A copy of the document with every edit made so far, for saving. */
-  get document(): BudgetDocument {
-    return JSON.parse(JSON.stringify(this.doc)) as BudgetDocument;
+  get document(): D {
+    return JSON.parse(JSON.stringify(this.doc)) as D;
   }
 
   /** Paths of every value cell, in document order. */
@@ -150,12 +164,8 @@ export class BudgetWorkbook {
     this.cellAt(path, 'unit').quantity.unit = unit;
   }
 
-  /**
-   * Reads every cell and builds the engine's input from those that
-   * evaluated. Throws nothing: every problem is a cell error, and a failure
-   * that leaves no input is `blocked`.
-   */
-  evaluate(): SheetEvaluation {
+  /** Reads every cell: its number or its error, and its unit checked. Throws nothing. */
+  readCells(): ReadCells {
     const outcomes = new Map<string, CellOutcome>();
     this.cells.forEach((c, row) => outcomes.set(c.location.path, this.outcome(c, row)));
     explainDependencies(this.cells, outcomes);
@@ -174,8 +184,7 @@ export class BudgetWorkbook {
         badUnits.add(path);
       }
     }
-    const built = buildBudgetInput(this.doc, (path) => (badUnits.has(path) ? undefined : cellValues.get(path)));
-    return { ...built, cellErrors, cellValues };
+    return { cellErrors, cellValues, lookup: (path) => (badUnits.has(path) ? undefined : cellValues.get(path)) };
   }
 
   /** Releases the engine. The workbook must not be used afterwards. Throws nothing. */
@@ -215,5 +224,23 @@ export class BudgetWorkbook {
     const engine = this.engine!;
     const text = 'sheet' in p ? engine.simpleCellAddressToString(p, this.sheetId) : engine.simpleCellRangeToString(p, this.sheetId);
     return text ?? 'a cell';
+  }
+}
+
+/** An editable, evaluable planar budget. Structural edits (adding a row, renaming an id) need a new workbook. */
+export class BudgetWorkbook extends CellSheet<BudgetDocument> {
+  /** Builds the engine for a copy of `document`; see {@link CellSheet}. Throws nothing for a parsed planar document. */
+  constructor(document: BudgetDocument, options: { engine?: 'always' | 'for-formulas' } = {}) {
+    super(document, listCells, options);
+  }
+
+  /**
+   * Reads every cell and builds the engine's input from those that
+   * evaluated. Throws nothing: every problem is a cell error, and a failure
+   * that leaves no input is `blocked`.
+   */
+  evaluate(): SheetEvaluation {
+    const { cellErrors, cellValues, lookup } = this.readCells();
+    return { ...buildBudgetInput(this.doc, lookup), cellErrors, cellValues };
   }
 }

@@ -4,7 +4,7 @@
  * is left out and listed, so everything else still computes; the start pose
  * and the step have no such fallback, so their failure means no input.
  */
-import type { BudgetDocument, MissionEntry } from '../document/budget-document';
+import type { BudgetDocument, MissionEntry, RequirementEntry } from '../document/budget-document';
 import type { BudgetInput, CheckpointInput, MissionInput, RequirementInput, SegmentInput } from '../inputs/budget-input';
 import { buildSensors, type SensorIndexMap } from './build-sensors';
 import { keepBuilt, QuantityReader, type CellLookup, type OmittedItem } from './cell-reader';
@@ -48,7 +48,10 @@ function buildMission(r: QuantityReader, m: MissionEntry, omitted: OmittedItem[]
   };
 }
 
-function buildRequirements(r: QuantityReader, doc: BudgetDocument, omitted: OmittedItem[], kept: number[]): RequirementInput[] {
+/** The requirements whose cells evaluated (either model's: the quantity is copied as written). */
+export function buildRequirements<Q extends string>(
+  r: QuantityReader, doc: { requirements?: (Omit<RequirementEntry, 'quantity'> & { quantity: Q })[] }, omitted: OmittedItem[], kept: number[],
+): (Omit<RequirementInput, 'quantity'> & { quantity: Q })[] {
   return keepBuilt(doc.requirements ?? [], 'requirements', (req, p) => {
     const limit = r.quantity(req.limit, `${p}.limit`);
     const window = req.window && r.fields(req.window, `${p}.window`, ['start', 'end']);
@@ -57,7 +60,8 @@ function buildRequirements(r: QuantityReader, doc: BudgetDocument, omitted: Omit
   }, (req) => `requirement ${req.id}`, omitted, kept);
 }
 
-function buildCheckpoints(r: QuantityReader, doc: BudgetDocument, omitted: OmittedItem[], kept: number[]): CheckpointInput[] {
+/** The checkpoints whose time evaluated. */
+export function buildCheckpoints(r: QuantityReader, doc: Pick<BudgetDocument, 'checkpoints'>, omitted: OmittedItem[], kept: number[]): CheckpointInput[] {
   return keepBuilt(doc.checkpoints ?? [], 'checkpoints', (c, p) => {
     const time = r.quantity(c.time, `${p}.time`);
     return time && { id: c.id, time };

@@ -10,3 +10,6 @@ export type { BuiltInput, InputIndexMap } from './build-input';
 export type { CellError, CellErrorKind, CellLocation } from './cell-error';
 export type { OmittedItem } from './cell-reader';
 export type { SheetEvaluation } from './sheet-evaluation';
+export { CellSheet, type ReadCells } from './budget-workbook';
+export { evaluateInertialDocument, InertialWorkbook, type InertialSheetEvaluation } from './inertial-workbook';
+export type { InertialBuiltInput, InertialIndexMap } from './build-inertial-input';

@@ -6,6 +6,8 @@ import type { SchemaNode } from '../../src/document/budget-schema';
 import { LEVELS, QUANTITY_NAMES } from '../../src/budget/levels';
 import { SENSOR_KIND_NAMES } from '../../src/sensors/registry';
 import { SOURCE_KIND_NAMES } from '../../src/sources/registry';
+import { INERTIAL_SENSOR_KINDS } from '../../src/document/inertial-document';
+import { INERTIAL_REQUIREMENT_QUANTITIES } from '../../src/inertial/inertial-quantities';
 import { minimalDocument } from './minimal-document';
 
 const defs = BUDGET_SCHEMA.definitions;
@@ -40,9 +42,10 @@ describe('the published budget schema', () => {
   });
 
   it('lists the kinds and levels the engine knows', () => {
-    expect(defs.sensor.properties!.kind.enum).toEqual(SENSOR_KIND_NAMES);
+    // Both models' kinds and quantities, planar first (src/document/model-keys.ts tells them apart).
+    expect(defs.sensor.properties!.kind.enum).toEqual([...new Set([...SENSOR_KIND_NAMES, ...INERTIAL_SENSOR_KINDS])]);
     expect(defs.source.properties!.kind.enum).toEqual(SOURCE_KIND_NAMES);
-    expect(defs.requirement.properties!.quantity.enum).toEqual(QUANTITY_NAMES);
+    expect(defs.requirement.properties!.quantity.enum).toEqual([...new Set([...QUANTITY_NAMES, ...INERTIAL_REQUIREMENT_QUANTITIES])]);
     expect(defs.requirement.properties!.level.enum).toEqual(LEVELS);
   });
 

@@ -4,7 +4,7 @@ import type { BudgetDocument } from '../../src/document';
 export function minimalDocument(): BudgetDocument {
   return {
     format: 'sigma-ledger-budget',
-    formatVersion: 1,
+    formatVersion: 2,
     title: 'Minimal test budget',
     description: 'An invented scenario for tests: a gyro and a wheel-speed sensor on a straight drive.',
     settings: { step: { value: 1, unit: 's' } },

@@ -3,6 +3,7 @@ import {
   BudgetFileError,
   MAX_DEPTH,
   MAX_TEXT_CHARS,
+  MIGRATIONS,
   parseBudgetDocument,
   serializeBudgetDocument,
   type BudgetDocument,
@@ -185,7 +186,7 @@ describe('parseBudgetDocument and format versions', () => {
   it('refuses a newer version with the versions in the message', () => {
     const e = errorOf(textWith((d) => { d.formatVersion = 7; }));
     expect(e.path).toBe('formatVersion');
-    expect(e.message).toContain('this file is format version 7; this tool reads up to version 1 — update Sigma Ledger');
+    expect(e.message).toContain('this file is format version 7; this tool reads up to version 2 — update Sigma Ledger');
   });
 
   it('refuses an older version that has no migration', () => {
@@ -199,20 +200,24 @@ describe('parseBudgetDocument and format versions', () => {
   it('migrates an older version through the registry and returns a note', () => {
     // A made-up version 0 that called the step "timeStep" at the top level.
     const v0 = textWith((d) => { d.formatVersion = 0; d.timeStep = d.settings.step; delete d.settings; });
-    const migrations = new Map([[0, {
+    const migrations = new Map([...MIGRATIONS, [0, {
       from: 0,
       note: 'timeStep moved into settings.step',
       migrate: ({ timeStep, ...rest }: Record<string, unknown>) => ({ ...rest, settings: { step: timeStep } }),
     }]]);
     const { document, notes } = parseBudgetDocument(v0, FILE, { migrations });
-    expect(document.formatVersion).toBe(1);
+    expect(document.formatVersion).toBe(2);
+    expect(document.model).toBe('planar');
     expect(document.settings.step).toEqual({ value: 1, unit: 's' });
-    expect(notes).toEqual(['Migrated from format version 0 to 1: timeStep moved into settings.step']);
+    expect(notes).toEqual([
+      'Migrated from format version 0 to 1: timeStep moved into settings.step',
+      'Migrated from format version 1 to 2: the budget now names its error model ("model": "planar"); nothing else changed',
+    ]);
   });
 
   it('validates the migrated document against the current schema', () => {
     const v0 = textWith((d) => { d.formatVersion = 0; });
-    const migrations = new Map([[0, { from: 0, note: 'adds junk', migrate: (raw: Record<string, unknown>) => ({ ...raw, junk: 1 }) }]]);
+    const migrations = new Map([...MIGRATIONS, [0, { from: 0, note: 'adds junk', migrate: (raw: Record<string, unknown>) => ({ ...raw, junk: 1 }) }]]);
     expect(() => parseBudgetDocument(v0, FILE, { migrations })).toThrow(/junk/);
   });
 });

@@ -17,7 +17,7 @@ describe('serializeBudgetDocument', () => {
 
   it('starts with the format header and ends with one newline', () => {
     const text = serializeBudgetDocument(minimalDocument());
-    expect(text.startsWith('{\n  "format": "sigma-ledger-budget",\n  "formatVersion": 1,\n  "title"')).toBe(true);
+    expect(text.startsWith('{\n  "format": "sigma-ledger-budget",\n  "formatVersion": 2,\n  "title"')).toBe(true);
     expect(text.endsWith('}\n')).toBe(true);
     expect(text.endsWith('}\n\n')).toBe(false);
   });
