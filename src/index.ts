@@ -101,3 +101,8 @@ export { checkResidualWhiteness } from './calibration/residual-whiteness';
 // 3-D (inertial) budget documents: their workbook and evaluation to InertialBudgetInput.
 export { CellSheet, InertialWorkbook, evaluateInertialDocument } from './sheet';
 export type { InertialIndexMap, InertialSheetEvaluation, ReadCells } from './sheet';
+
+// The page's view of 3-D budgets: series, shares, verdicts and path of an inertial document.
+export { inertialViewFromSheet, type InertialView, type InertialLine, type InertialShareEntry } from './report/inertial-view-result';
+export { inertialVerdict, inertialLevelSeries, type InertialVerdict } from './report/inertial-level-series';
+export { inertialDocumentPath } from './report/inertial-document-path';

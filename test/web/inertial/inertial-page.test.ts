@@ -1,0 +1,120 @@
+import { expect } from '@open-wc/testing';
+import { AIDING_KIND_NAMES } from '../../../src';
+import type { InertialBudgetDocument } from '../../../src';
+import type { SlInertialChart } from '../../../web/components/sl-inertial-chart';
+import { deepQuery, deepQueryAll, settle } from '../workbench/helpers';
+import { cellMessage, computed3d, droneApp, typeInto } from './helpers';
+
+/**
+ * The page on a 3-D budget (budgets/survey-drone.json, an invented
+ * scenario): it loads from the examples menu into the 3-D editors, an IMU
+ * edit recomputes, the axis column edits the row, and bad input gets a
+ * message naming the field while the typed text stays. Expected numbers are
+ * the engine's own (the view is the engine's output); what is checked here
+ * is that the page shows and edits them.
+ */
+describe('the page on a 3-D budget', function () {
+  this.timeout(240_000);
+
+  const doc = (app: Awaited<ReturnType<typeof droneApp>>) => app.store.document as unknown as InertialBudgetDocument;
+  const imuRow = (app: Awaited<ReturnType<typeof droneApp>>, id: string) => doc(app).sensors[0].sources.findIndex((r) => r.id === id);
+
+  it('loads the 3-D example into the 3-D editors, with verdicts, the four σ charts, the plan and the profile', async () => {
+    const app = await droneApp();
+    expect(doc(app).model).to.equal('inertial');
+    expect(app.shadowRoot!.querySelector('sl-workbench')).to.equal(null);
+    const rows = deepQueryAll(app, 'sl-imu-grid tbody tr[data-row]');
+    expect(rows.map((r) => r.dataset.row)).to.deep.equal(doc(app).sensors[0].sources.map((r) => r.id));
+    const verdicts = deepQueryAll(app, 'tr[data-requirement]').map((r) => r.dataset.requirement);
+    expect(verdicts).to.deep.equal(['outageDrift', 'heightHold', 'yawHold']);
+    const charts = deepQueryAll<SlInertialChart>(app, 'sl-inertial-chart');
+    expect(charts.map((c) => c.kind)).to.deep.equal(['position', 'height', 'attitude', 'velocity']);
+    for (const c of charts) expect(c.charts.chart?.data.datasets.length, c.kind).to.be.greaterThan(0);
+    const attitude = charts[2].charts.chart!.data.datasets.map((d) => d.label);
+    expect(attitude).to.include.members(['roll 1σ', 'pitch 1σ', 'yaw 1σ', 'yawHold limit 2 deg']);
+    expect(deepQuery(app, 'sl-profile-view polyline.path').getAttribute('points')!.split(' ').length).to.be.greaterThan(100);
+    expect(deepQueryAll(app, 'sl-profile-view polyline.outage').length).to.equal(2);
+    expect(deepQuery(app, 'sl-plan-view polyline.path')).to.exist;
+  });
+
+  it('recomputes after an IMU cell is edited: a larger accelerometer bias drifts further in the outage', async () => {
+    const app = await droneApp();
+    const before = app.compute.view!.inertial!.verdicts[0].worst;
+    await typeInto(app, 'imu.aBias magnitude', '40');
+    expect(doc(app).sensors[0].sources[imuRow(app, 'aBias')].value).to.equal(40);
+    await computed3d(app);
+    expect(app.compute.view!.inertial!.verdicts[0].worst).to.be.greaterThan(before * 1.5);
+    app.store.undo();
+    expect(doc(app).sensors[0].sources[imuRow(app, 'aBias')].value).to.equal(4);
+  });
+
+  it('edits the axis column: a z-only row carries a z state alone, and undo brings back all three axes', async () => {
+    const app = await droneApp();
+    await typeInto(app, 'imu.aBias axis', 'z');
+    expect(doc(app).sensors[0].sources[imuRow(app, 'aBias')].axis).to.equal('z');
+    await computed3d(app);
+    const states = app.compute.view!.inertial!.calibration.map((c) => c.id);
+    expect(states).to.include('imu.aBias.z');
+    expect(states).not.to.include('imu.aBias.x');
+    app.store.undo();
+    expect(doc(app).sensors[0].sources[imuRow(app, 'aBias')].axis).to.equal(undefined);
+  });
+
+  it('refuses an axis that is not x, y, z or all with a message naming the field, keeping the typed text', async () => {
+    const app = await droneApp();
+    const before = JSON.stringify(app.store.document);
+    const j = imuRow(app, 'gBias');
+    const { cell, input } = await typeInto(app, 'imu.gBias axis', 'w');
+    expect(cellMessage(cell)).to.contain(`sensors[0].sources[${j}].axis`).and.to.contain('x, y, z or all');
+    expect(input.value).to.equal('w');
+    expect(JSON.stringify(app.store.document)).to.equal(before);
+  });
+
+  it('shows a lever arm of absurd length at the lever arm, keeping the typed value', async () => {
+    const app = await droneApp();
+    const { input } = await typeInto(app, 'gnss lever arm x', '5000');
+    await computed3d(app);
+    const sensor = deepQuery(app, 'sl-aiding-sensor');
+    expect(sensor.shadowRoot!.querySelector('[role="alert"]')?.textContent).to.contain('sensors[1].leverArm');
+    expect(input.value).to.equal('5000');
+  });
+
+  it('shows a negative height σ at its cell, naming the field, keeping the typed value', async () => {
+    const app = await droneApp();
+    deepQuery<HTMLButtonElement>(app, 'sl-inertial-workbench [role="tab"]:nth-child(2)').click();
+    await settle(app);
+    const { cell, input } = await typeInto(app, 'Initial position vertical', '-1');
+    await computed3d(app);
+    await settle(app);
+    expect(cellMessage(cell)).to.contain('mission.initialPosition.vertical');
+    expect(input.value).to.equal('-1');
+  });
+
+  it('offers the 3-D model\'s aiding kinds only when adding a sensor, and adds one', async () => {
+    const app = await droneApp();
+    const select = deepQuery<HTMLSelectElement>(app, 'select[aria-label="Add an aiding sensor"]');
+    expect([...select.options].map((o) => o.value).filter(Boolean)).to.deep.equal([...AIDING_KIND_NAMES]);
+    select.value = 'heading-aid';
+    select.dispatchEvent(new Event('change'));
+    await settle(app);
+    expect(doc(app).sensors.at(-1)!.kind).to.equal('heading-aid');
+    await computed3d(app);
+    expect(app.compute.view!.blocked).to.equal(undefined);
+  });
+
+  it('refuses a planar-only sensor in a 3-D file with a message naming its path, keeping the open budget', async () => {
+    const app = await droneApp();
+    const bad = structuredClone(app.store.document) as unknown as InertialBudgetDocument;
+    (bad.sensors as unknown[]).push({ id: 'cmp', kind: 'compass', rate: { value: 10, unit: 'Hz' }, sources: [] });
+    const input = app.shadowRoot!.querySelector<HTMLInputElement>('label.file input')!;
+    const files = new DataTransfer();
+    files.items.add(new File([JSON.stringify(bad)], 'bad-drone.json', { type: 'application/json' }));
+    input.files = files.files;
+    input.dispatchEvent(new Event('change'));
+    await new Promise((r) => setTimeout(r, 300));
+    await app.updateComplete;
+    const banner = app.shadowRoot!.querySelector('.banner[role="alert"]')?.textContent ?? '';
+    expect(banner).to.contain('bad-drone.json').and.to.contain('sensors[4]');
+    expect(doc(app).sensors.length).to.equal(4);
+  });
+});
