@@ -55,9 +55,9 @@ export class SlAidingSensor extends LitElement {
         </div>
         ${armProblem ? html`<div class="problem" role="alert">${armProblem}</div>` : nothing}` : nothing}
       <table aria-label=${`${s.id} rows`}>
-        <colgroup><col class="id" /><col class="kind" /><col /><col />${timed ? html`<col />` : nothing}<col class="del" /></colgroup>
-        <thead><tr><th>row</th><th>kind</th><th>σ${vertical ? ' (horizontal)' : ''}</th><th>${vertical ? 'σ vertical' : ''}</th>
-          ${timed ? html`<th>correlation time</th>` : nothing}<th></th></tr></thead>
+        <colgroup><col class="id" /><col class="kind" /><col />${vertical ? html`<col />` : nothing}${timed ? html`<col />` : nothing}<col class="del" /></colgroup>
+        <thead><tr><th>row</th><th>kind</th><th>σ${vertical ? ' (horizontal)' : ''}</th>${vertical ? html`<th>σ vertical</th>` : nothing}
+          ${timed ? html`<th>correlation time</th>` : nothing}<th><span class="sr-only">delete</span></th></tr></thead>
         <tbody>${s.sources.map((row, j) => this.row(row, `${base}.sources[${j}]`, j, kind))}</tbody>
       </table>
       <div class="bar">
@@ -80,8 +80,8 @@ export class SlAidingSensor extends LitElement {
       <tr data-row=${row.id}>
         <td>${row.id}</td><td>${row.kind}</td>
         <td><sl-quantity .store=${this.store} .view=${this.view} path=${path} label=${`${name} sigma`} .dimensions=${[dim]}></sl-quantity></td>
-        <td>${VERTICAL_SIGMA_KINDS.includes(kind) ? html`<sl-quantity .store=${this.store} .view=${this.view} path=${`${path}.vertical`}
-          label=${`${name} vertical sigma`} .dimensions=${[dim]} optional></sl-quantity>` : nothing}</td>
+        ${VERTICAL_SIGMA_KINDS.includes(kind) ? html`<td><sl-quantity .store=${this.store} .view=${this.view} path=${`${path}.vertical`}
+          label=${`${name} vertical sigma`} .dimensions=${[dim]} optional></sl-quantity></td>` : nothing}
         ${AIDING_PAGE_SPECS[kind]?.rows.multipath !== undefined ? html`<td>${row.kind === 'multipath' ? html`<sl-quantity .store=${this.store} .view=${this.view}
           path=${`${path}.correlationTime`} label=${`${name} correlation time`} .dimensions=${['time']} optional></sl-quantity>` : nothing}</td>` : nothing}
         <td><button class="icon" aria-label=${`Delete row ${name}`} @click=${() => this.removeRow(j)}>×</button></td>
@@ -97,7 +97,7 @@ export class SlAidingSensor extends LitElement {
     const word = key === 'outages' ? 'outage' : 'window';
     return html`
       <table aria-label=${`${s.id} ${key}`}>
-        <thead><tr><th>${word}</th><th>start</th><th>end</th><th style="width:30px"></th></tr></thead>
+        <thead><tr><th>${word}</th><th>start</th><th>end</th><th style="width:30px"><span class="sr-only">delete</span></th></tr></thead>
         <tbody>${list.map((o, i) => {
           const problem = itemProblem(this.view, `${base}[${i}]`);
           return html`

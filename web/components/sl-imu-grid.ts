@@ -43,7 +43,7 @@ export class SlImuGrid extends LitElement {
     return html`
       <table aria-label=${`${s.id} rows`}>
         <colgroup><col class="id" /><col class="inst" /><col class="axis" /><col class="kind" /><col /><col class="time" /><col class="del" /></colgroup>
-        <thead><tr><th>row</th><th>instrument</th><th>axis</th><th>kind</th><th>magnitude</th><th>correlation time</th><th></th></tr></thead>
+        <thead><tr><th>row</th><th>instrument</th><th>axis</th><th>kind</th><th>magnitude</th><th>correlation time</th><th><span class="sr-only">delete</span></th></tr></thead>
         <tbody>${s.sources.map((row, j) => this.row(row, `${base}.sources[${j}]`, j))}</tbody>
       </table>
       <div class="bar">

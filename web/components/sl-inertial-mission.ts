@@ -64,7 +64,7 @@ export class SlInertialMission extends LitElement {
       <h3>Legs</h3>
       <table aria-label="Legs">
         <colgroup><col class="seg-id" /><col /><col /><col /><col /><col /><col class="del" /></colgroup>
-        <thead><tr><th>leg</th><th>duration</th><th>speed</th><th>speed at end</th><th>turn rate</th><th>vertical speed (up)</th><th></th></tr></thead>
+        <thead><tr><th>leg</th><th>duration</th><th>speed</th><th>speed at end</th><th>turn rate</th><th>vertical speed (up)</th><th><span class="sr-only">delete</span></th></tr></thead>
         <tbody>${m.segments.map((s, i) => {
           const p = `mission.segments[${i}]`;
           const name = s.id ?? `leg ${i + 1}`;

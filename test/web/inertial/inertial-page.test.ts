@@ -23,7 +23,7 @@ describe('the page on a 3-D budget', function () {
     const app = await droneApp();
     expect(doc(app).model).to.equal('inertial');
     expect(app.shadowRoot!.querySelector('sl-workbench')).to.equal(null);
-    const rows = deepQueryAll(app, 'sl-imu-grid tbody tr[data-row]');
+    const rows = [...deepQuery(app, 'sl-imu-grid').shadowRoot!.querySelectorAll<HTMLElement>('tbody tr[data-row]')];
     expect(rows.map((r) => r.dataset.row)).to.deep.equal(doc(app).sensors[0].sources.map((r) => r.id));
     const verdicts = deepQueryAll(app, 'tr[data-requirement]').map((r) => r.dataset.requirement);
     expect(verdicts).to.deep.equal(['outageDrift', 'heightHold', 'yawHold']);
@@ -32,20 +32,22 @@ describe('the page on a 3-D budget', function () {
     for (const c of charts) expect(c.charts.chart?.data.datasets.length, c.kind).to.be.greaterThan(0);
     const attitude = charts[2].charts.chart!.data.datasets.map((d) => d.label);
     expect(attitude).to.include.members(['roll 1σ', 'pitch 1σ', 'yaw 1σ', 'yawHold limit 2 deg']);
-    expect(deepQuery(app, 'sl-profile-view polyline.path').getAttribute('points')!.split(' ').length).to.be.greaterThan(100);
-    expect(deepQueryAll(app, 'sl-profile-view polyline.outage').length).to.equal(2);
-    expect(deepQuery(app, 'sl-plan-view polyline.path')).to.exist;
+    const profile = deepQuery(app, 'sl-profile-view').shadowRoot!;
+    expect(profile.querySelector('polyline.path')!.getAttribute('points')!.split(' ').length).to.be.greaterThan(100);
+    expect(profile.querySelectorAll('polyline.outage').length).to.equal(2);
+    expect(deepQuery(app, 'sl-plan-view').shadowRoot!.querySelector('polyline.path')).to.exist;
   });
 
-  it('recomputes after an IMU cell is edited: a larger accelerometer bias drifts further in the outage', async () => {
+  it('recomputes after an IMU cell is edited: a ten times larger gyro bias instability drifts further in the outage', async () => {
     const app = await droneApp();
     const before = app.compute.view!.inertial!.verdicts[0].worst;
-    await typeInto(app, 'imu.aBias magnitude', '40');
-    expect(doc(app).sensors[0].sources[imuRow(app, 'aBias')].value).to.equal(40);
+    await typeInto(app, 'imu.gBi magnitude', '40');
+    expect(doc(app).sensors[0].sources[imuRow(app, 'gBi')].value).to.equal(40);
     await computed3d(app);
+    // Heading error grows with the bias and turns the outage's acceleration errors sideways: the R95 drift grows.
     expect(app.compute.view!.inertial!.verdicts[0].worst).to.be.greaterThan(before * 1.5);
     app.store.undo();
-    expect(doc(app).sensors[0].sources[imuRow(app, 'aBias')].value).to.equal(4);
+    expect(doc(app).sensors[0].sources[imuRow(app, 'gBi')].value).to.equal(4);
   });
 
   it('edits the axis column: a z-only row carries a z state alone, and undo brings back all three axes', async () => {
@@ -81,7 +83,7 @@ describe('the page on a 3-D budget', function () {
 
   it('shows a negative height σ at its cell, naming the field, keeping the typed value', async () => {
     const app = await droneApp();
-    deepQuery<HTMLButtonElement>(app, 'sl-inertial-workbench [role="tab"]:nth-child(2)').click();
+    deepQuery(app, 'sl-inertial-workbench').shadowRoot!.querySelectorAll<HTMLButtonElement>('[role="tab"]')[1].click();
     await settle(app);
     const { cell, input } = await typeInto(app, 'Initial position vertical', '-1');
     await computed3d(app);
