@@ -40,6 +40,8 @@ export interface AnalysisBlock {
 
 /** A document analysed as far as it could be. */
 export interface DocumentAnalysis {
+  /** Absent for planar budgets (3-D ones: InertialDocumentAnalysis, `model: 'inertial'`). */
+  model?: 'planar';
   document: BudgetDocument;
   /** One note per format migration applied while parsing (empty for a current file or a parsed document). */
   notes: string[];

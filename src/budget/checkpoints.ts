@@ -79,11 +79,18 @@ export function nearestStep(t: Float64Array, tS: number): number {
 export function budgetsAt(series: BudgetSeries, sources: ModelSource[], k: number): QuantityBudget[] {
   return (Object.keys(series.quantities) as VarianceQuantity[]).map((q) => {
     const s = series.quantities[q]!;
-    const total = s.total[k];
-    const shares = s.bySource
-      .map((v, i) => ({ sourceId: sources[i].id, sigmaSI: Math.sqrt(Math.max(0, v[k])), fraction: total > 0 ? v[k] / total : 0 }))
-      .filter((x) => x.fraction > 0)
-      .sort((a, b) => b.fraction - a.fraction);
-    return { quantity: q, totalSigmaSI: Math.sqrt(Math.max(0, total)), shares };
+    return { quantity: q, totalSigmaSI: Math.sqrt(Math.max(0, s.total[k])), shares: sharesAt(s.total[k], s.bySource, sources, k) };
   });
+}
+
+/**
+ * Each source's part of a variance `total` (SI) at step k, from the sources'
+ * variance series of either model (indexed like `sources`), largest first,
+ * zeros left out. Throws nothing.
+ */
+export function sharesAt(total: number, bySource: readonly ArrayLike<number>[], sources: readonly { id: string }[], k: number): SourceShare[] {
+  return bySource
+    .map((v, i) => ({ sourceId: sources[i].id, sigmaSI: Math.sqrt(Math.max(0, v[k])), fraction: total > 0 ? v[k] / total : 0 }))
+    .filter((x) => x.fraction > 0)
+    .sort((a, b) => b.fraction - a.fraction);
 }

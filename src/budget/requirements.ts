@@ -3,14 +3,18 @@ import { quantityToSI, requireArray, requireId, requireOneOf } from '../inputs/c
 import type { ConfidenceLevel, QuantityName, RequirementInput } from '../inputs/budget-input';
 import type { MeasurementStream } from '../covariance/error-model';
 import { TIME_SLACK_S } from '../mission/nominal-trajectory';
-import { fromSI } from '../units';
+import { fromSI, type DimensionName } from '../units';
 import type { BudgetSeries } from './budget-series';
 import { LEVELS, levelSeries, limitDimension, QUANTITY_NAMES } from './levels';
 
-/** A requirement in SI, validated. */
-export interface ResolvedRequirement {
+/**
+ * A requirement in SI, validated. `Q` is the model's quantity names: the
+ * planar table's by default, the inertial model's ids for 3-D budgets
+ * (src/budget/inertial-requirements.ts); the code below serves both.
+ */
+export interface ResolvedRequirement<Q extends string = QuantityName> {
   id: string;
-  quantity: QuantityName;
+  quantity: Q;
   level: ConfidenceLevel;
   limitSI: number;
   /** The limit as written, for margins in the limit's unit. */
@@ -31,9 +35,9 @@ export interface OutageHold {
 }
 
 /** A requirement's verdict over its window. */
-export interface RequirementResult {
+export interface RequirementResult<Q extends string = QuantityName> {
   id: string;
-  quantity: QuantityName;
+  quantity: Q;
   level: ConfidenceLevel;
   limit: { value: number; unit: string };
   verdict: 'pass' | 'fail';
@@ -46,11 +50,27 @@ export interface RequirementResult {
   outages: OutageHold[];
 }
 
+/** An aiding sensor's outages, as requirement code reads them (planar MeasurementStream and inertial streams alike). */
+export type OutageSpans = Pick<MeasurementStream, 'sensorId' | 'outages'>;
+
 /**
- * Validates requirements against the mission.
+ * Validates planar requirements against the mission.
  * @throws InputError naming the requirement's field.
  */
 export function resolveRequirements(list: RequirementInput[] | undefined, durationS: number): ResolvedRequirement[] {
+  return resolveRequirementList(list, durationS, QUANTITY_NAMES, limitDimension);
+}
+
+/**
+ * Validates requirements of either model against the mission.
+ * @param quantities the names a requirement of this model may constrain.
+ * @param dimensionOf the dimension of a quantity's limit.
+ * @throws InputError naming the requirement's field.
+ */
+export function resolveRequirementList<Q extends string>(
+  list: (Omit<RequirementInput, 'quantity'> & { quantity: string })[] | undefined, durationS: number,
+  quantities: readonly Q[], dimensionOf: (q: Q) => DimensionName,
+): ResolvedRequirement<Q>[] {
   const ids = new Set<string>();
   return requireArray(list ?? [], 'requirements', true).map((r, i) => {
     const p = `requirements[${i}]`;
@@ -58,9 +78,9 @@ export function resolveRequirements(list: RequirementInput[] | undefined, durati
     const id = requireId(r.id, `${p}.id`);
     if (ids.has(id)) throw new InputError(`${p}.id`, `"${id}" is used by another requirement`);
     ids.add(id);
-    const quantity = requireOneOf(r.quantity, QUANTITY_NAMES, `${p}.quantity`);
+    const quantity = requireOneOf(r.quantity as Q, quantities, `${p}.quantity`);
     const level = requireOneOf(r.level, LEVELS, `${p}.level`);
-    const limitSI = quantityToSI(r.limit, limitDimension(quantity), `${p}.limit`);
+    const limitSI = quantityToSI(r.limit, dimensionOf(quantity), `${p}.limit`);
     if (!(limitSI > 0)) throw new InputError(`${p}.limit.value`, `must be greater than zero, got ${r.limit.value}`);
     let windowStartS = 0, windowEndS = durationS;
     if (r.window !== undefined) {
@@ -80,14 +100,23 @@ export function resolveRequirements(list: RequirementInput[] | undefined, durati
  * window; the break time is interpolated linearly between steps.
  */
 export function evaluateRequirement(req: ResolvedRequirement, series: BudgetSeries, streams: MeasurementStream[]): RequirementResult {
-  const values = levelSeries(series, req.quantity, req.level, req.path);
-  const t = series.tS;
+  return judgeRequirement(req, levelSeries(series, req.quantity, req.level, req.path), series.tS, streams, limitDimension(req.quantity));
+}
+
+/**
+ * The verdict of one requirement of either model from the values it compares
+ * with its limit (SI, at the requirement's level) at the steps `t`, and the
+ * time-to-exceed after each outage of `streams` that overlaps its window.
+ * @param dim the dimension of the limit, to show the worst value in the limit's unit.
+ */
+export function judgeRequirement<Q extends string>(
+  req: ResolvedRequirement<Q>, values: Float64Array, t: Float64Array, streams: readonly OutageSpans[], dim: DimensionName,
+): RequirementResult<Q> {
   let worst = -Infinity, worstK = 0;
   for (let k = 0; k < t.length; k++) {
     if (t[k] < req.windowStartS - TIME_SLACK_S || t[k] > req.windowEndS + TIME_SLACK_S) continue;
     if (values[k] > worst) { worst = values[k]; worstK = k; }
   }
-  const dim = limitDimension(req.quantity);
   const worstValue = fromSI(worst, req.limit.unit, dim, `${req.path}.limit`);
   const outages: OutageHold[] = [];
   for (const stream of streams) {

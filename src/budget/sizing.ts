@@ -8,6 +8,29 @@ import { runCovariance } from '../covariance/run-covariance';
 import { positiveToSI } from '../inputs/checks';
 import { buildBudgetSeries } from './budget-series';
 import { evaluateRequirement, resolveRequirements, type RequirementResult } from './requirements';
+import type { InertialBudgetInput } from '../inertial/inertial-input';
+import type { Quantity } from '../inputs/budget-input';
+import { inertialRequirementsOf } from './inertial-requirements';
+
+/**
+ * The input of either model that sizing works on: the bisection, the row
+ * lookup and the trial runs below serve planar and 3-D budgets alike; only
+ * {@link requirementsOf} and the row list differ by model.
+ */
+export type SizableInput = BudgetInput | InertialBudgetInput;
+
+/** True for a 3-D input (it has an IMU). Throws nothing. */
+export function isInertialInput(input: SizableInput): input is InertialBudgetInput {
+  return 'imu' in input;
+}
+
+/** Every row of an input by its full id, in document order. */
+function rowsOf(input: SizableInput): { id: string; row: { value: Quantity } }[] {
+  const sensors = isInertialInput(input)
+    ? [{ id: input.imu.id, rows: input.imu.rows }, ...(input.aiding ?? []).map((a) => ({ id: a.id, rows: a.rows }))]
+    : (input.sensors ?? []).map((s) => ({ id: s.id, rows: s.sources ?? [] }));
+  return sensors.flatMap((s) => (s.rows ?? []).map((row) => ({ id: `${s.id}.${row.id}`, row })));
+}
 
 /** Options of {@link sizeSource}. */
 export interface SizingOptions {
@@ -33,8 +56,8 @@ export interface SizingResult {
   smallestFailing?: number;
   /** Half the final bracket, in the row's unit. */
   tolerance: number;
-  atLargestPassing?: RequirementResult;
-  atSmallestFailing?: RequirementResult;
+  atLargestPassing?: RequirementResult<string>;
+  atSmallestFailing?: RequirementResult<string>;
   trials: number;
   /** For 'always-passes': why the search stopped (the row's valid range, or the doubling limit). */
   stoppedBecause?: string;
@@ -51,11 +74,11 @@ const MAX_DOUBLINGS = 20;
  * @param sourceId `sensorId.rowId`.
  * @throws InputError for an unknown requirement or row.
  */
-export function sizeSource(input: BudgetInput, requirementId: string, sourceId: string, options: SizingOptions = {}): SizingResult {
+export function sizeSource(input: SizableInput, requirementId: string, sourceId: string, options: SizingOptions = {}): SizingResult {
   const row = findRow(input, sourceId);
   const tolerance = options.relativeTolerance ?? 1e-3;
   let trials = 0;
-  const trial = (value: number): RequirementResult => {
+  const trial = (value: number): RequirementResult<string> => {
     const r = evaluateWith(input, sourceId, value, requirementId);
     trials++;
     options.onTrial?.(trials, value, r.verdict);
@@ -91,19 +114,19 @@ export function sizeSource(input: BudgetInput, requirementId: string, sourceId: 
 }
 
 /** Ids (`sensorId.rowId`) of every row whose magnitude can be sized or swept, in document order. */
-export function sizableRowIds(input: BudgetInput): string[] {
-  return (input.sensors ?? []).flatMap((s) => (s.sources ?? []).map((r) => `${s.id}.${r.id}`));
+export function sizableRowIds(input: SizableInput): string[] {
+  return rowsOf(input).map((r) => r.id);
 }
 
 /**
  * The row `sourceId` (`sensorId.rowId`) of an input.
  * @throws InputError at 'vary' listing the rows that exist.
  */
-export function findRow(input: BudgetInput, sourceId: string): SourceInput {
-  const dot = sourceId.indexOf('.');
-  const sensor = input.sensors?.find((s) => s.id === sourceId.slice(0, dot));
-  const row = sensor?.sources?.find((r) => r.id === sourceId.slice(dot + 1));
-  if (dot < 0 || !row) throw new InputError('vary', `no row "${sourceId}"; give it as sensorId.rowId, one of ${sizableRowIds(input).join(', ')}`);
+export function findRow(input: BudgetInput, sourceId: string): SourceInput;
+export function findRow(input: SizableInput, sourceId: string): { value: Quantity };
+export function findRow(input: SizableInput, sourceId: string): { value: Quantity } {
+  const row = rowsOf(input).find((r) => r.id === sourceId)?.row;
+  if (!row) throw new InputError('vary', `no row "${sourceId}"; give it as sensorId.rowId, one of ${sizableRowIds(input).join(', ')}`);
   return row;
 }
 
@@ -112,14 +135,19 @@ export function findRow(input: BudgetInput, sourceId: string): SourceInput {
  * (in the row's unit), from one run of the total covariance (no contributions).
  * @throws InputError for an unknown row or a value outside the row's valid range.
  */
-export function requirementsWith(input: BudgetInput, sourceId: string, value: number): RequirementResult[] {
-  const copy = JSON.parse(JSON.stringify(input)) as BudgetInput;
+export function requirementsWith(input: BudgetInput, sourceId: string, value: number): RequirementResult[];
+export function requirementsWith(input: SizableInput, sourceId: string, value: number): RequirementResult<string>[];
+export function requirementsWith(input: SizableInput, sourceId: string, value: number): RequirementResult<string>[] {
+  const copy = JSON.parse(JSON.stringify(input)) as SizableInput;
   findRow(copy, sourceId).value.value = value;
   return requirementsOf(copy);
 }
 
-/** Every requirement's verdict of an input, from one run of the total covariance. */
-export function requirementsOf(input: BudgetInput): RequirementResult[] {
+/** Every requirement's verdict of an input of either model, from one run of the total covariance. */
+export function requirementsOf(input: BudgetInput): RequirementResult[];
+export function requirementsOf(input: SizableInput): RequirementResult<string>[];
+export function requirementsOf(input: SizableInput): RequirementResult<string>[] {
+  if (isInertialInput(input)) return inertialRequirementsOf(input);
   const mission = resolveMission(input.mission);
   const stepS = positiveToSI(input.step, 'time', 'step');
   const model = buildErrorModel(input.sensors, mission, input.mission.initialSigmaNotes);
@@ -131,7 +159,7 @@ export function requirementsOf(input: BudgetInput): RequirementResult[] {
 }
 
 /** One requirement's verdict with one row's value replaced. */
-function evaluateWith(input: BudgetInput, sourceId: string, value: number, requirementId: string): RequirementResult {
+function evaluateWith(input: SizableInput, sourceId: string, value: number, requirementId: string): RequirementResult<string> {
   const r = requirementsWith(input, sourceId, value).find((x) => x.id === requirementId);
   if (!r) throw new InputError('requirement', `no requirement "${requirementId}"; the budget has ${(input.requirements ?? []).map((x) => x.id).join(', ') || 'none'}`);
   return r;

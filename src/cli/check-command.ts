@@ -1,11 +1,11 @@
 /** `sigma-ledger check FILE`: validate a budget and evaluate its cells (and its engine input), without reporting. */
 import { EXIT, type Io } from './commands';
 import type { CliCommand } from './cli-command';
-import { loadBudget, reportProblems, throwIfBlocked } from './load-budget';
+import { loadAnyBudget, reportProblems, throwIfBlocked } from './load-budget';
 
 /** Runs `check`; returns 0 for a valid budget, 2 otherwise. @throws SigmaLedgerError for bad input. */
 export function checkCommand(file: string, io: Io): number {
-  const loaded = loadBudget(file, { report: false });
+  const loaded = loadAnyBudget(file, { report: false });
   if (reportProblems(loaded, io)) return EXIT.badInput;
   throwIfBlocked(loaded);
   io.out(`${loaded.fileName}: valid (${loaded.sheet.cellValues.size} cells evaluated)\n`);

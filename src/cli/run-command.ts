@@ -11,7 +11,8 @@ import { formatSummary } from '../report/text-summary';
 import { jsonChunks } from '../report/json-chunks';
 import { EXIT, writePieces, type Io } from './commands';
 import { JSON_OPTION, textOption, type CliCommand, type ParsedValues } from './cli-command';
-import { loadBudget, reportProblems, throwIfBlocked } from './load-budget';
+import { loadAnyBudget, reportProblems, throwIfBlocked, type LoadedInertialBudget } from './load-budget';
+import { formatInertialSummary } from '../report/inertial-text-summary';
 import { integerOption, positiveOption } from './number-options';
 import { filterDesignReport } from './filter-design-report';
 import { withDocumentPaths } from './load-budget';
@@ -29,7 +30,7 @@ export interface RunOptions {
 /** Runs `run` on one file (`-`: standard input); returns the exit code. @throws SigmaLedgerError for bad input. */
 export async function runCommand(file: string, opts: RunOptions, io: Io): Promise<number> {
   let started: number | undefined;
-  const loaded = loadBudget(file, {
+  const loaded = loadAnyBudget(file, {
     beforeCompute: (input) => {
       if (announceLongRun(input, io)) started = Date.now();
     },
@@ -38,6 +39,7 @@ export async function runCommand(file: string, opts: RunOptions, io: Io): Promis
   const problems = reportProblems(loaded, io);
   if (loaded.sheet.blocked) return EXIT.badInput;
   throwIfBlocked(loaded);
+  if (loaded.model === 'inertial') return runInertial(loaded, problems, opts, io);
   const budget = loaded.budget!;
   if (started !== undefined) io.err(`computed ${budget.trajectory.tS.length} steps in ${((Date.now() - started) / 1000).toFixed(1)} s\n`);
   const design = withDocumentPaths(loaded, (input) => filterDesignReport(input, budget));
@@ -50,6 +52,17 @@ export async function runCommand(file: string, opts: RunOptions, io: Io): Promis
   // With a filter design the verdict is the actual error's, not the optimal filter's.
   const holds = design ? design.holds : budget.requirements.every((r) => r.verdict === 'pass');
   return holds ? EXIT.pass : EXIT.fail;
+}
+
+/** The 3-D branch of run: the summary or the JSON result, and the exit code from the verdicts. */
+async function runInertial(loaded: LoadedInertialBudget, problems: boolean, opts: RunOptions, io: Io): Promise<number> {
+  const budget = loaded.budget!;
+  const pieces = loaded.report
+    ? withNewline(jsonChunks(loaded.report, { significantDigits: opts.significant }))
+    : [formatInertialSummary(budget, { title: loaded.title, fileName: loaded.fileName })];
+  await writePieces(pieces, io, opts.output);
+  if (problems) return EXIT.badInput;
+  return budget.requirements.every((r) => r.verdict === 'pass') ? EXIT.pass : EXIT.fail;
 }
 
 function* withNewline(pieces: Iterable<string>): Generator<string> {

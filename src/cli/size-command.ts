@@ -1,11 +1,10 @@
 /** `sigma-ledger size FILE --requirement ID --vary SENSOR.ROW`: the largest allowable value of one row. */
-import { sizeSource, type SizingResult } from '../budget/sizing';
+import { sizeSource, type SizableInput, type SizingResult } from '../budget/sizing';
 import { InputError } from '../errors';
-import type { BudgetInput } from '../inputs/budget-input';
 import { formatSignificant } from '../units';
 import { EXIT, type Io } from './commands';
 import { JSON_OPTION, textOption, UsageError, type CliCommand } from './cli-command';
-import { loadBudget, reportProblems, withDocumentPaths } from './load-budget';
+import { loadAnyBudget, reportProblems, withDocumentPaths, withInertialDocumentPaths } from './load-budget';
 import { positiveOption } from './number-options';
 import { checkSizingTarget } from './sizing-target';
 import { sizeSweepCommand } from './size-sweep';
@@ -13,15 +12,16 @@ import { formatToTolerance } from '../report/tolerance-text';
 
 /** Runs `size`; returns the exit code (1 when the requirement fails even with the row at zero). @throws SigmaLedgerError for bad input. */
 export function sizeCommand(file: string, requirementId: string, rowId: string, tolerance: number, json: boolean, io: Io): number {
-  const loaded = loadBudget(file, { contributions: false, report: false });
+  const loaded = loadAnyBudget(file, { contributions: false, report: false });
   if (reportProblems(loaded, io)) return EXIT.badInput;
-  const result = withDocumentPaths(loaded, (input) => {
+  const size = (input: SizableInput) => {
     checkSizingTarget(input, rowId, requirementId);
     return sizeSource(input, requirementId, rowId, {
       relativeTolerance: tolerance,
       onTrial: (n, value, verdict) => io.err(`trial ${n}: ${rowId} = ${formatSignificant(value, 6)} -> ${verdict}\n`),
     });
-  });
+  };
+  const result = loaded.model === 'inertial' ? withInertialDocumentPaths(loaded, size) : withDocumentPaths(loaded, size);
   io.out(json ? JSON.stringify(result) + '\n' : formatSizing(result));
   return result.outcome === 'never-passes' ? EXIT.fail : EXIT.pass;
 }

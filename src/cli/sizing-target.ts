@@ -1,13 +1,12 @@
 import { InputError } from '../errors';
-import type { BudgetInput } from '../inputs/budget-input';
-import { sizableRowIds } from '../budget/sizing';
+import { sizableRowIds, type SizableInput } from '../budget/sizing';
 
 /**
  * Checks `size`'s --vary and --requirement against the budget before any run.
  * @throws InputError at --vary listing every row that can be varied, or at
  *   --requirement listing the budget's requirements.
  */
-export function checkSizingTarget(input: BudgetInput, rowId: string, requirementId: string | undefined): void {
+export function checkSizingTarget(input: SizableInput, rowId: string, requirementId: string | undefined): void {
   const rows = sizableRowIds(input);
   if (!rows.includes(rowId)) {
     throw new InputError('--vary', `no row "${rowId}"; give it as sensorId.rowId, one of: ${rows.join(', ')}`);

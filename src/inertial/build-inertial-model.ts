@@ -7,6 +7,7 @@ import { ATTITUDE, NAV_STATES, POSITION, VELOCITY, type InertialModel, type Iner
 import { resolveImuErrors } from './imu-errors';
 import { aidingContext } from './aiding/aiding-context';
 import { AIDING_KINDS } from './aiding/aiding-kinds';
+import { windowGaps } from './aiding/use-windows';
 
 const NAV_NAMES = ['position.north', 'position.east', 'position.down', 'velocity.north', 'velocity.east', 'velocity.down',
   'attitude.north', 'attitude.east', 'attitude.down'];
@@ -34,6 +35,7 @@ export function buildInertialModel(
     if (!resolver) throw new InputError(`${path}.kind`, `is not an aiding kind of the inertial model: ${Object.keys(AIDING_KINDS).join(', ')}`);
     const added: InertialState[] = [];
     const ctx = aidingContext(sensor, path, mission.durationS, added, states.length, sources);
+    ctx.outages.push(...windowGaps(sensor, path, mission));
     const rowsAt = resolver(ctx);
     states.push(...added);
     return { sensorId: sensor.id, rateHz: ctx.rateHz, outages: ctx.outages, rowsAt };

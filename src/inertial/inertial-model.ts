@@ -69,7 +69,8 @@ export interface InertialMeasurementRow {
 export interface InertialStream {
   sensorId: string;
   rateHz: number;
-  outages: { id: string; startS: number; endS: number }[];
+  /** Half-open spans without measurements; `gap` marks a span outside the sensor's windows of use, not an outage. */
+  outages: { id: string; startS: number; endS: number; gap?: true }[];
   rowsAt(row: NominalRow): InertialMeasurementRow[];
 }
 

@@ -147,7 +147,7 @@ export function varianceShares(series: BudgetSeries, model: ErrorModel, keep: nu
 }
 
 /** One requirement's JSON entry. Throws nothing. */
-export function requirementEntry(r: RequirementResult): RequirementEntry {
+export function requirementEntry(r: RequirementResult<string>): RequirementEntry {
   return {
     id: r.id, quantity: r.quantity, level: r.level, limit: r.limit.value, unit: r.limit.unit, verdict: r.verdict, margin: r.margin,
     worst: r.worstValue, worst_t_s: r.worstTimeS, window_s: [r.windowStartS, r.windowEndS],

@@ -58,19 +58,21 @@ export function traceNoise(model: ErrorModel): NoiseTrace {
   return { r: [...r.values()], q: [...q.values()], p0: [...p0.values()] };
 }
 
-function getOrAdd<K, V>(map: Map<K, V>, key: K, make: () => V): V {
+/** The entry under `key`, made by `make` when there is none yet. */
+export function getOrAdd<K, V>(map: Map<K, V>, key: K, make: () => V): V {
   let v = map.get(key);
   if (!v) map.set(key, (v = make()));
   return v;
 }
 
-function add(e: TracedEntry, piece: TracedPiece): void {
+/** Adds a source's piece to an entry's total. */
+export function add(e: TracedEntry, piece: TracedPiece): void {
   e.pieces.push(piece);
   e.totalSI += piece.valueSI;
 }
 
 /** "m" -> "m²", "rad/s" -> "(rad/s)²", "1" -> "1". */
-function squared(unit: string): string {
+export function squared(unit: string): string {
   if (unit === '1') return '1';
   return /^[a-zA-Zµ]+$/.test(unit) ? `${unit}²` : `(${unit})²`;
 }

@@ -6,7 +6,7 @@ import { confidenceFactor1D } from '../budget/confidence';
 import type { ConfidenceLevel } from '../inputs/budget-input';
 import { CAUTION } from './caution';
 import { DISPLAY, sigmaForDisplay } from './display-units';
-import { traceNoise, type TracedEntry } from './noise-trace';
+import { traceNoise, type NoiseTrace, type TracedEntry } from './noise-trace';
 
 /** What the summary needs besides the result. */
 export interface SummaryContext {
@@ -32,17 +32,18 @@ export function formatSummary(result: BudgetResult, ctx: SummaryContext): string
     '',
     ...requirementLines(result.requirements),
     '',
-    ...assumptionLines(result),
+    ...assumptionLines(result.model.sources),
     ...result.checkpoints.flatMap((cp) => checkpointLines(cp, result.reportLevel)),
     ...calibrationLines(result),
     '',
-    ...traceLines(result),
+    ...traceLines(traceNoise(result.model)),
     '',
     ...statusLines(result),
   ].join('\n') + '\n';
 }
 
-function requirementLines(reqs: RequirementResult[]): string[] {
+/** The requirement verdicts of either model, with time-to-exceed per outage. Throws nothing. */
+export function requirementLines(reqs: RequirementResult<string>[]): string[] {
   if (reqs.length === 0) return ['REQUIREMENTS: none given'];
   const held = reqs.filter((r) => r.verdict === 'pass').length;
   const lines = [`REQUIREMENTS: ${held} of ${reqs.length} hold`];
@@ -60,8 +61,9 @@ function requirementLines(reqs: RequirementResult[]): string[] {
   return lines;
 }
 
-function assumptionLines(result: BudgetResult): string[] {
-  const assumed = result.model.sources.filter((s) => s.assumed);
+/** The sources marked assumed, of either model. Throws nothing. */
+export function assumptionLines(sources: readonly { id: string; assumed: boolean; provenance?: string }[]): string[] {
+  const assumed = sources.filter((s) => s.assumed);
   if (assumed.length === 0) return [];
   return [
     `ASSUMED VALUES (nobody measured these or read them from a datasheet; the verdicts rest on them):`,
@@ -100,8 +102,8 @@ function calibrationLines(result: BudgetResult): string[] {
   return lines;
 }
 
-function traceLines(result: BudgetResult): string[] {
-  const trace = traceNoise(result.model);
+/** The R, Q and P0 used, traced to rows, of either model. Throws nothing. */
+export function traceLines(trace: NoiseTrace, discretisation = 'Q_d by Van Loan per step'): string[] {
   const block = (title: string, entries: TracedEntry[]) => [
     title,
     ...entries.flatMap((e) => [
@@ -111,14 +113,18 @@ function traceLines(result: BudgetResult): string[] {
   ];
   return [
     ...block('R USED (measurement noise variance per scalar measurement):', trace.r),
-    ...block('Q USED (continuous PSD per noise input; Q_d by Van Loan per step):', trace.q),
+    ...block(`Q USED (continuous PSD per noise input; ${discretisation}):`, trace.q),
     ...block('P0 USED (initial variance per state):', trace.p0),
   ];
 }
 
 function statusLines(result: BudgetResult): string[] {
-  const issues = result.history.issues;
-  const warnings = result.warnings.map((w) => `  WARNING ${w.source}: ${w.message}`);
+  return numericalStatusLines(result.history.issues, result.warnings);
+}
+
+/** The numerical status of a run of either model, with any model warnings. Throws nothing. */
+export function numericalStatusLines(issues: BudgetResult['history']['issues'], modelWarnings: BudgetResult['warnings']): string[] {
+  const warnings = modelWarnings.map((w) => `  WARNING ${w.source}: ${w.message}`);
   if (issues.length === 0) return ['NUMERICAL STATUS: covariance stayed finite, symmetric and positive semi-definite', ...warnings];
   return ['NUMERICAL STATUS: problems found', ...issues.map((i) => `  ${i.kind} at ${time(i.tS)}: ${i.detail}`), ...warnings];
 }

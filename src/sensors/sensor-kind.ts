@@ -136,11 +136,13 @@ export function checkRowKind(spec: Pick<SensorKindSpec, 'label' | 'sourceKinds'>
  * The sensor's outages in seconds, each inside the mission with start < end.
  * @throws InputError naming the outage for one outside the mission or empty.
  */
-export function resolveOutages(sensor: SensorInput, ctx: SensorContext): { id: string; startS: number; endS: number }[] {
-  const list = sensor.outages ?? [];
-  if (!Array.isArray(list)) throw new InputError(`${ctx.path}.outages`, 'must be a list of { start, end }');
+export function resolveOutages(
+  sensor: SensorInput, ctx: Pick<SensorContext, 'path' | 'missionDurationS'>, key = 'outages',
+): { id: string; startS: number; endS: number }[] {
+  const list = (sensor as unknown as Record<string, SensorInput['outages']>)[key] ?? [];
+  if (!Array.isArray(list)) throw new InputError(`${ctx.path}.${key}`, 'must be a list of { start, end }');
   return list.map((o, i) => {
-    const p = `${ctx.path}.outages[${i}]`;
+    const p = `${ctx.path}.${key}[${i}]`;
     const startS = quantityToSI(o?.start, 'time', `${p}.start`);
     const endS = quantityToSI(o.end, 'time', `${p}.end`);
     if (startS < -TIME_SLACK_S || endS > ctx.missionDurationS + TIME_SLACK_S) {

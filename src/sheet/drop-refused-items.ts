@@ -71,6 +71,53 @@ function dropItem(input: BudgetInput, map: SheetEvaluation['indexMap'], path: st
   return false;
 }
 
+/** An item dropped for an engine refusal: where to show the error, and the item's path and words. */
+export interface DroppedItem {
+  docPath: string;
+  location: CellLocation;
+  itemPath: string;
+  what: string;
+}
+
+/** The shared fields of either model's sheet evaluation that dropping touches. */
+interface DroppableSheet<I, M> {
+  input?: I;
+  indexMap: M;
+  cellErrors: CellError[];
+  omitted: SheetEvaluation['omitted'];
+}
+
+/**
+ * The loop behind both models' item dropping: `probe` is called on a copy of
+ * the input; when it throws for a path, `drop` removes the item that path
+ * names from the input and the map (undefined when it names none), the error
+ * is added in place and the probe repeated. Throws nothing else.
+ */
+export function dropWhileRefused<S extends DroppableSheet<object, object>>(
+  sheet: S, probe: (input: NonNullable<S['input']>) => void,
+  drop: (enginePath: string, input: NonNullable<S['input']>, map: S['indexMap']) => DroppedItem | undefined,
+): S {
+  if (!sheet.input) return sheet;
+  const input = JSON.parse(JSON.stringify(sheet.input)) as NonNullable<S['input']>;
+  const indexMap = JSON.parse(JSON.stringify(sheet.indexMap)) as S['indexMap'];
+  const cellErrors: CellError[] = [...sheet.cellErrors];
+  const omitted = [...sheet.omitted];
+  for (;;) {
+    try {
+      probe(input);
+      break;
+    } catch (e) {
+      if (!(e instanceof SigmaLedgerError) || !e.path) break;
+      const item = drop(e.path, input, indexMap);
+      if (!item) break;
+      cellErrors.push({ location: item.location, kind: /\.unit$/.test(item.docPath) ? 'unit' : 'out-of-range', message: e.message.slice(e.path.length + 2) });
+      omitted.push({ path: item.itemPath, what: item.what });
+    }
+  }
+  if (cellErrors.length === sheet.cellErrors.length) return sheet;
+  return { ...sheet, input, indexMap, cellErrors, omitted };
+}
+
 /**
  * The evaluation with every item the engine refuses left out: `probe` (the
  * checks before a run, e.g. pipeline's prepareBudget) is called on the
@@ -80,24 +127,10 @@ function dropItem(input: BudgetInput, map: SheetEvaluation['indexMap'], path: st
  * run then reports that error as before). Throws nothing else.
  */
 export function dropRefusedItems(doc: BudgetDocument, sheet: SheetEvaluation, probe: (input: BudgetInput) => void): SheetEvaluation {
-  if (!sheet.input) return sheet;
-  const input = JSON.parse(JSON.stringify(sheet.input)) as BudgetInput;
-  const indexMap = JSON.parse(JSON.stringify(sheet.indexMap)) as SheetEvaluation['indexMap'];
-  const cellErrors: CellError[] = [...sheet.cellErrors];
-  const omitted = [...sheet.omitted];
-  for (;;) {
-    try {
-      probe(input);
-      break;
-    } catch (e) {
-      if (!(e instanceof SigmaLedgerError) || !e.path) break;
-      const docPath = documentPathOf(e.path, indexMap);
-      const itemPath = (SENSOR_ITEM.exec(docPath) ?? TOP_ITEM.exec(docPath))?.[0];
-      if (!itemPath || !dropItem(input, indexMap, e.path)) break;
-      cellErrors.push({ location: locationOf(doc, docPath), kind: /\.unit$/.test(docPath) ? 'unit' : 'out-of-range', message: e.message.slice(e.path.length + 2) });
-      omitted.push({ path: itemPath, what: describeItem(doc, itemPath) });
-    }
-  }
-  if (cellErrors.length === sheet.cellErrors.length) return sheet;
-  return { ...sheet, input, indexMap, cellErrors, omitted };
+  return dropWhileRefused(sheet, probe, (path, input, map) => {
+    const docPath = documentPathOf(path, map);
+    const itemPath = (SENSOR_ITEM.exec(docPath) ?? TOP_ITEM.exec(docPath))?.[0];
+    if (!itemPath || !dropItem(input, map, path)) return undefined;
+    return { docPath, location: locationOf(doc, docPath), itemPath, what: describeItem(doc, itemPath) };
+  });
 }

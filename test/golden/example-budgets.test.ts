@@ -17,6 +17,7 @@ const EXPECTED_EXIT: Record<string, { code: number; why: string }> = {
   'harbour-launch.json': { code: 0, why: 'both heading requirements hold under the bridge (its summary: PASS, PASS)' },
   'orchard-rover.json': { code: 1, why: 'the cross-track requirement breaks on purpose in the 90 s canopy outage (README)' },
   'warehouse-tug.json': { code: 1, why: 'lane keeping breaks 39 s after the pallets hide the reflectors (its summary)' },
+  'survey-drone.json': { code: 0, why: '3-D: R95 drift in the quarry-face outage, height and yaw all hold (its summary: PASS x3)' },
 };
 
 describe('golden summaries', () => {
