@@ -103,6 +103,6 @@ export { CellSheet, InertialWorkbook, evaluateInertialDocument } from './sheet';
 export type { InertialIndexMap, InertialSheetEvaluation, ReadCells } from './sheet';
 
 // The page's view of 3-D budgets: series, shares, verdicts and path of an inertial document.
-export { inertialViewFromSheet, type InertialView, type InertialLine, type InertialShareEntry } from './report/inertial-view-result';
-export { inertialVerdict, inertialLevelSeries, type InertialVerdict } from './report/inertial-level-series';
-export { inertialDocumentPath } from './report/inertial-document-path';
+export {
+  inertialViewFromSheet, type InertialView, type InertialLine, type InertialShareEntry, type InertialViewVerdict,
+} from './report/inertial-view-result';

@@ -1,19 +1,22 @@
 /**
  * The page's view of a 3-D (inertial) budget: the cells evaluated, the
  * inertial model run (runInertialBudget, docs/inertial-model.md), and what
- * the page draws, thinned to at most MAX_CHART_POINTS steps: every 3-D
+ * the page draws, built on the shared 3-D analysis (analyseInertialDocument:
+ * refused items left out in place, requirements judged by src/budget/),
+ * thinned to at most MAX_CHART_POINTS steps: every 3-D
  * quantity's 1σ in display units, CEP and R95, calibration sigmas per axis,
  * each source's share traced to its document row, requirement verdicts,
  * the path seen from above and its height over distance.
  */
 import type { InertialBudgetDocument } from '../document/inertial-document';
-import { SigmaLedgerError } from '../errors';
-import { runInertialBudget, type InertialBudget } from '../inertial/run-inertial';
+import { analyseInertialDocument } from '../analyse-inertial-document';
+import type { InertialBudgetResult } from '../inertial-pipeline';
+import type { InertialBudget } from '../inertial/run-inertial';
+import { inertialLevelValues, inertialLimitDimension } from '../budget/inertial-requirements';
+import type { RequirementResult } from '../budget/requirements';
 import type { InertialSheetEvaluation } from '../sheet/inertial-workbook';
 import { fromSI, toSI, type DimensionName } from '../units';
 import { CAUTION } from './caution';
-import { inertialDocumentPath } from './inertial-document-path';
-import { inertialLevelSeries, inertialLimitDimension, inertialVerdict, type InertialVerdict } from './inertial-level-series';
 import { keptSteps } from './json-result';
 import { MAX_CHART_POINTS, type RequirementCurve, type ViewResult } from './view-result';
 
@@ -47,6 +50,24 @@ export interface InertialShareEntry {
   variance: number[];
 }
 
+/** A requirement's verdict as the page shows it: the shared result, in the limit's unit, plus when it first fails. */
+export interface InertialViewVerdict {
+  id: string;
+  quantity: string;
+  level: string;
+  pass: boolean;
+  limit: number;
+  unit: string;
+  worst: number;
+  worstAtS: number;
+  /** First time in the window the value exceeds the limit (s); absent when it never does. */
+  firstExceedS?: number;
+  /** The window, s (the whole mission without one). */
+  windowS: [number, number];
+  /** Document path of the requirement. */
+  path: string;
+}
+
 /** The 3-D parts of a view. */
 export interface InertialView {
   t: number[];
@@ -56,7 +77,7 @@ export interface InertialView {
   calibration: InertialLine[];
   /** Per quantity id, each source's variance over time (empty while contributions are pending). */
   shares: Record<string, InertialShareEntry[]>;
-  verdicts: (InertialVerdict & { unit: string; limit: number; worst: number; path: string })[];
+  verdicts: InertialViewVerdict[];
   /** The nominal path: north, east (m), height (m) and horizontal distance travelled (m) per kept step. */
   path: { north: number[]; east: number[]; height: number[]; distanceM: number[] };
   outages: { sensorId: string; id: string; startS: number; endS: number }[];
@@ -81,8 +102,20 @@ function horizontalDistance(b: InertialBudget): number[] {
   });
 }
 
-function buildView(doc: InertialBudgetDocument, sheet: InertialSheetEvaluation, b: InertialBudget): { inertial: InertialView; curves: RequirementCurve[] } {
+/** The shared verdict with the first time the requirement's value exceeds its limit in its window. */
+function viewVerdict(b: InertialBudget, r: RequirementResult<string>, path: string): InertialViewVerdict {
+  const limitSI = toSI(r.limit.value, r.limit.unit, inertialLimitDimension(r.quantity), `${path}.limit`);
+  const values = inertialLevelValues(b, r.quantity, r.level);
+  const k = b.rows.findIndex((row, i) => row.tS >= r.windowStartS && row.tS <= r.windowEndS && values[i] > limitSI);
+  return {
+    id: r.id, quantity: r.quantity, level: r.level, pass: r.verdict === 'pass', limit: r.limit.value, unit: r.limit.unit,
+    worst: r.worstValue, worstAtS: r.worstTimeS, ...(k >= 0 && { firstExceedS: b.rows[k].tS }), windowS: [r.windowStartS, r.windowEndS], path,
+  };
+}
+
+function buildView(doc: InertialBudgetDocument, sheet: InertialSheetEvaluation, result: InertialBudgetResult): { inertial: InertialView; curves: RequirementCurve[] } {
   const input = sheet.input!;
+  const b = result.budget;
   const steps = keptSteps(b.rows.length, Math.ceil(b.rows.length / MAX_CHART_POINTS));
   const keep = (a: ArrayLike<number>, f = 1) => steps.map((k) => a[k] * f);
   const lines: Record<string, InertialLine> = {};
@@ -100,18 +133,11 @@ function buildView(doc: InertialBudgetDocument, sheet: InertialSheetEvaluation, 
     const { unit, factor } = display(b.model.states.find((s) => s.name === name)?.unitSI ?? '1');
     return { id: name, label: name, unit, values: keep(sigma, factor) };
   });
-  const reqs = input.requirements ?? [];
-  const verdicts = reqs.map((req, i) => {
-    const path = `requirements[${sheet.indexMap.requirements[i]}]`;
-    const v = inertialVerdict(b, req, path);
-    const dim = inertialLimitDimension(req.quantity, path);
-    const f = fromSI(1, req.limit.unit, dim, `${path}.limit`);
-    return { ...v, unit: req.limit.unit, limit: req.limit.value, worst: v.worstSI * f, path };
+  const verdicts = result.requirements.map((r, i) => viewVerdict(b, r, `requirements[${sheet.indexMap.requirements[i]}]`));
+  const curves: RequirementCurve[] = result.requirements.map((r, i) => {
+    const perSI = fromSI(1, r.limit.unit, inertialLimitDimension(r.quantity), verdicts[i].path);
+    return { id: r.id, quantity: r.quantity, level: r.level, limit: r.limit.value, unit: r.limit.unit, values: keep(inertialLevelValues(b, r.quantity, r.level), perSI) };
   });
-  const curves: RequirementCurve[] = reqs.map((req, i) => ({
-    id: req.id, quantity: req.quantity, level: req.level, limit: verdicts[i].limit, unit: req.limit.unit,
-    values: keep(inertialLevelSeries(b, req.quantity, req.level, verdicts[i].path), verdicts[i].limit / verdicts[i].limitSI),
-  }));
   const distance = horizontalDistance(b);
   const inertial: InertialView = {
     t: keep(Float64Array.from(b.rows, (r) => r.tS)), lines, calibration, shares, verdicts,
@@ -138,21 +164,21 @@ function inertialOutages(input: NonNullable<InertialSheetEvaluation['input']>): 
  * comes back as `blocked` with the document path of the field and as an
  * error on that cell, so the page shows it in place and keeps the text.
  */
-export function inertialViewFromSheet(doc: InertialBudgetDocument, sheet: InertialSheetEvaluation, options: { contributions?: boolean } = {}): ViewResult {
+export function inertialViewFromSheet(doc: InertialBudgetDocument, evaluated: InertialSheetEvaluation, options: { contributions?: boolean } = {}): ViewResult {
+  const a = analyseInertialDocument(doc, [], { evaluate: () => evaluated, contributions: options.contributions !== false, report: false });
+  const sheet = a.sheet;
   const base: ViewResult = {
     title: doc.title, caution: CAUTION, cellErrors: sheet.cellErrors, omitted: sheet.omitted,
     cellValues: Object.fromEntries(sheet.cellValues), curves: [],
   };
-  if (!sheet.input) return { ...base, blocked: { message: sheet.blocked ?? 'nothing to compute' } };
-  try {
-    const b = runInertialBudget(sheet.input, { contributions: options.contributions !== false });
-    const { inertial, curves } = buildView(doc, sheet, b);
-    return { ...base, inertial, curves, ...(options.contributions === false && { contributionsPending: true }) };
-  } catch (e) {
-    if (!(e instanceof SigmaLedgerError)) throw e;
-    const path = inertialDocumentPath(e.path, sheet.indexMap);
-    const message = e.message.slice(e.path ? e.path.length + 2 : 0);
-    const cellError = { location: { path, field: path.split('.').slice(-2).join('.') }, kind: 'other' as const, message: `${path}: ${message}` };
-    return { ...base, cellErrors: [...base.cellErrors, cellError], blocked: { message: `${path}: ${message}`, path } };
+  if (!a.budget || !sheet.input) {
+    const blocked = a.blocked ?? { message: 'nothing to compute' };
+    // A refusal at a cell is also that cell's error (the path names the cell), so the page shows it in place and keeps what was typed.
+    const path = blocked.path;
+    const message = path ? `${path}: ${blocked.message}` : blocked.message;
+    const cellErrors = path ? [...base.cellErrors, { location: { path, field: path.split('.').slice(-2).join('.') }, kind: 'other' as const, message }] : base.cellErrors;
+    return { ...base, cellErrors, blocked: { message, ...(path && { path }) } };
   }
+  const { inertial, curves } = buildView(doc, sheet, a.budget);
+  return { ...base, inertial, curves, ...(options.contributions === false && { contributionsPending: true }) };
 }
