@@ -106,3 +106,5 @@ export type { InertialIndexMap, InertialSheetEvaluation, ReadCells } from './she
 export {
   inertialViewFromSheet, type InertialView, type InertialLine, type InertialShareEntry, type InertialViewVerdict,
 } from './report/inertial-view-result';
+export { INERTIAL_REQUIREMENT_QUANTITIES } from './inertial/inertial-quantities';
+export { inertialLimitDimension } from './budget/inertial-requirements';

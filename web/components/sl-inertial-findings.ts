@@ -34,6 +34,7 @@ export class SlInertialFindings extends LitElement {
     .views { display: grid; grid-template-columns: 1fr 1fr; gap: 8px; align-items: start; }
     .stale { opacity: 0.6; }
     .note { color: var(--sl-ink-soft); font-size: 12px; }
+    h3 span.unit-symbol { text-transform: none; }
   `;
 
   @property({ attribute: false }) view?: ViewResult;
@@ -78,7 +79,7 @@ export class SlInertialFindings extends LitElement {
   private calibration() {
     const v = this.view!.inertial!;
     return html`
-      <h3>Calibration states at the end (1σ)</h3>
+      <h3>Calibration states <span class="unit-symbol">(1σ)</span></h3>
       <table aria-label="Calibration states">
         <thead><tr><th>state</th><th>start</th><th>end</th></tr></thead>
         <tbody>${v.calibration.map((c) => html`<tr><td>${c.label}</td><td class="num">${num(c.values[0])} ${c.unit}</td>

@@ -31,6 +31,7 @@ const START_SIGMAS = [
 export class SlInertialMission extends LitElement {
   static override styles = [editorStyles, css`
     :host { display: block; }
+    h3 span.unit-symbol { text-transform: none; }
     .start { display: grid; grid-template-columns: repeat(5, 1fr); gap: 4px 8px; }
     .start label, .sigmas label { font-size: 11px; color: var(--sl-ink-soft); display: block; }
     .sigmas td:first-child { width: 28%; }
@@ -54,7 +55,7 @@ export class SlInertialMission extends LitElement {
             ${ATTITUDE_RULES.map(([r, text]) => html`<option value=${r} ?selected=${r === m.attitudeRule}>${text}</option>`)}
           </select></label>
       </div>
-      <h3>Start uncertainty (1σ)</h3>
+      <h3>Start uncertainty <span class="unit-symbol">(1σ)</span></h3>
       <table class="sigmas" aria-label="Start uncertainty">
         <thead><tr><th>source</th><th>horizontal (per axis)</th><th>vertical</th></tr></thead>
         <tbody>${START_SIGMAS.map(([key, label, dim, vertical]) => html`

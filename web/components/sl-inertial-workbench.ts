@@ -1,7 +1,10 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property, state } from 'lit/decorators.js';
 import type { AidingKind, ViewResult } from '../../src';
-import { AIDING_KIND_NAMES, AIDING_PAGE_SPECS, IMU_SENSOR_KIND, LEVER_ARM_KINDS, uniqueId } from '../../src';
+import {
+  AIDING_KIND_NAMES, AIDING_PAGE_SPECS, IMU_SENSOR_KIND, INERTIAL_REQUIREMENT_QUANTITIES, LEVER_ARM_KINDS, inertialLimitDimension, uniqueId,
+} from '../../src';
+import type { RequirementModel } from './sl-requirement-table';
 import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
 import { editInertial, inertialDoc } from '../inertial/inertial-store';
@@ -10,6 +13,9 @@ import './sl-imu-grid';
 import './sl-inertial-mission';
 import './sl-requirements-editor';
 import './sl-values-editor';
+
+/** What a 3-D requirement may constrain (src/inertial/inertial-quantities.ts) and its limit's dimension. */
+const INERTIAL_REQUIREMENTS: RequirementModel = { quantities: INERTIAL_REQUIREMENT_QUANTITIES, dimensionOf: inertialLimitDimension };
 
 type Tab = 'sensors' | 'mission' | 'values' | 'requirements';
 const TABS: [Tab, string][] = [['sensors', 'Sensors'], ['mission', 'Mission'], ['values', 'Named values'], ['requirements', 'Requirements']];
@@ -30,6 +36,7 @@ export class SlInertialWorkbench extends LitElement {
     [role='tab'][aria-selected='true'] { background: var(--sl-ink); color: var(--sl-paper); border-color: var(--sl-ink); }
     .model { font-size: 12px; color: var(--sl-ink-soft); margin: 6px 0; }
     .alerts { margin: 8px 0 0; display: grid; gap: 4px; }
+    label.inline select { width: auto; max-width: 60%; }
   `];
 
   @property({ attribute: false }) store!: DocumentStore;
@@ -68,7 +75,7 @@ export class SlInertialWorkbench extends LitElement {
     switch (this.tab) {
       case 'mission': return html`<sl-inertial-mission .store=${this.store} .view=${this.view}></sl-inertial-mission>`;
       case 'values': return html`<sl-values-editor .store=${this.store} .view=${this.view}></sl-values-editor>`;
-      case 'requirements': return html`<sl-requirements-editor .store=${this.store} .view=${this.view}></sl-requirements-editor>`;
+      case 'requirements': return html`<sl-requirements-editor .store=${this.store} .view=${this.view} .model=${INERTIAL_REQUIREMENTS}></sl-requirements-editor>`;
       default: return html`
         ${doc.sensors.map((s, i) => s.kind === IMU_SENSOR_KIND
           ? html`<h3>${s.id}: IMU</h3>
