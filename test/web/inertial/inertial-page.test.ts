@@ -111,6 +111,37 @@ describe('the page on a 3-D budget', function () {
     expect(app.compute.view!.omitted.map((o) => o.path)).to.deep.equal(['sensors[4].windows[0]']);
   });
 
+  it('offers the trade units of each instrument and kind, and converts on a unit change', async () => {
+    const app = await droneApp();
+    const grid = deepQuery(app, 'sl-imu-grid');
+    const units = (label: string) => [...deepQuery<HTMLSelectElement>(grid, `select[aria-label="${label}"]`).options].map((o) => o.value);
+    expect(units('imu.gArw magnitude unit')).to.include.members(['deg/√h', 'deg/s/√Hz', 'mdps/√Hz', 'deg/s']);
+    expect(units('imu.aVrw magnitude unit')).to.include.members(['µg/√Hz', 'm/s/√h', 'mg']);
+    expect(units('imu.aBias magnitude unit')).to.include.members(['mg', 'µg', 'm/s²']);
+    expect(units('imu.gBias magnitude unit')).to.include.members(['deg/h', 'dps', 'mdeg/s']);
+    const select = deepQuery<HTMLSelectElement>(grid, 'select[aria-label="imu.aBias magnitude unit"]');
+    select.value = 'µg';
+    select.dispatchEvent(new Event('change', { bubbles: true }));
+    await settle(app);
+    const row = doc(app).sensors[0].sources[imuRow(app, 'aBias')];
+    // 4 mg = 4000 µg (SI prefixes, BIPM SI Brochure, 9th edition, Table 7).
+    expect([row.value, row.unit]).to.deep.equal([4000, 'µg']);
+  });
+
+  it('edits 3-D requirements with the 3-D quantities', async () => {
+    const app = await droneApp();
+    deepQuery(app, 'sl-inertial-workbench').shadowRoot!.querySelectorAll<HTMLButtonElement>('[role="tab"]')[3].click();
+    await settle(app);
+    const quantity = deepQuery<HTMLSelectElement>(app, 'select[aria-label="heightHold quantity"]');
+    expect(quantity.value).to.equal('height');
+    expect([...quantity.options].map((o) => o.value)).to.include.members(['height', 'roll', 'pitch', 'yaw', 'drms', 'horizontal']);
+    quantity.value = 'pitch';
+    quantity.dispatchEvent(new Event('change'));
+    await settle(app);
+    expect(doc(app).requirements![1].quantity).to.equal('pitch');
+    expect(doc(app).requirements![1].limit.unit).to.equal('deg');
+  });
+
   it('offers the 3-D model\'s aiding kinds only when adding a sensor, and adds one', async () => {
     const app = await droneApp();
     const select = deepQuery<HTMLSelectElement>(app, 'select[aria-label="Add an aiding sensor"]');
