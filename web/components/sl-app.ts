@@ -81,8 +81,9 @@ export class SlApp extends LitElement {
         <div class="title" title=${this.store.fileName}>${this.store.document.title} · ${this.store.fileName}</div>
         <label class="file" title="Open a budget file (or drop one on the page)">Open…<input type="file" accept=".json,application/json" @change=${this.opened} /></label>
         <button @click=${this.save} title="Save the budget as JSON (the same file the command line reads)">Save</button>
-        <button id="report" ?disabled=${this.reporting} @click=${this.downloadReport}
-          title="Download the design-review report: one HTML file to open, print or file (the same as sigma-ledger report)">${this.reporting ? 'Making report…' : 'Report'}</button>
+        <button id="report" ?disabled=${this.reporting || this.is3d} @click=${this.downloadReport}
+          title=${this.is3d ? 'The design-review report covers planar budgets only so far; save the 3-D budget and run it with sigma-ledger run'
+            : 'Download the design-review report: one HTML file to open, print or file (the same as sigma-ledger report)'}>${this.reporting ? 'Making report…' : 'Report'}</button>
         <select aria-label="Load an example budget" @change=${this.loadExample}>
           <option value="">Examples…</option>
           ${EXAMPLES.map((e, i) => html`<option value=${i} data-file=${e.fileName}>${e.document.title}</option>`)}
@@ -96,13 +97,18 @@ export class SlApp extends LitElement {
         ${this.autosave.failure}. A reload would lose them; keep a copy of the current budget:
         <button @click=${this.save}>Download the current budget</button></div>` : nothing}
       ${this.message ? html`<div class="banner" role="alert">${this.message}<button @click=${() => (this.message = undefined)}>Dismiss</button></div>` : nothing}
-      <main>${isInertialDocument(this.store.document as AnyBudgetDocument) ? html`
+      <main>${this.is3d ? html`
         <sl-inertial-workbench .store=${this.store} .view=${c.view}></sl-inertial-workbench>
         <sl-inertial-findings .view=${c.view} .stale=${c.stale}></sl-inertial-findings>` : html`
         <sl-workbench .store=${this.store} .view=${c.view}></sl-workbench>
         <sl-findings .view=${c.view} .stale=${c.stale} .status=${c.status} .document=${this.store.document}></sl-findings>`}
       </main>
     `;
+  }
+
+  /** True while the open document is a 3-D budget (its own editors and findings). */
+  private get is3d(): boolean {
+    return isInertialDocument(this.store.document as AnyBudgetDocument);
   }
 
   private statusText(): string {

@@ -4,6 +4,9 @@ import type { InertialBudgetDocument } from '../../../src';
 import type { SlInertialChart } from '../../../web/components/sl-inertial-chart';
 import { deepQuery, deepQueryAll, settle } from '../workbench/helpers';
 import { cellMessage, computed3d, droneApp, typeInto } from './helpers';
+import { freshApp } from '../app/helpers';
+import { EXAMPLES } from '../../../web/examples';
+import type { SlApp } from '../../../web/components/sl-app';
 
 /**
  * The page on a 3-D budget (budgets/survey-drone.json, an invented
@@ -13,6 +16,17 @@ import { cellMessage, computed3d, droneApp, typeInto } from './helpers';
  * the engine's own (the view is the engine's output); what is checked here
  * is that the page shows and edits them.
  */
+/** Opens `file` through the page's Open… field, as a user picking it would. */
+async function openFile(app: SlApp, file: File): Promise<void> {
+  const input = app.shadowRoot!.querySelector<HTMLInputElement>('label.file input')!;
+  const files = new DataTransfer();
+  files.items.add(file);
+  input.files = files.files;
+  input.dispatchEvent(new Event('change'));
+  await new Promise((r) => setTimeout(r, 300));
+  await app.updateComplete;
+}
+
 describe('the page on a 3-D budget', function () {
   this.timeout(240_000);
 
@@ -154,17 +168,21 @@ describe('the page on a 3-D budget', function () {
     expect(app.compute.view!.blocked).to.equal(undefined);
   });
 
+  it('refuses an IMU in a planar file with a message naming its path, keeping the open budget', async () => {
+    const app = await freshApp();
+    const planar = structuredClone(EXAMPLES[0].document);
+    (planar.sensors as unknown[]).push({ id: 'imu', kind: 'imu', rate: { value: 100, unit: 'Hz' }, sources: [] });
+    await openFile(app, new File([JSON.stringify(planar)], 'planar-with-imu.json', { type: 'application/json' }));
+    const banner = app.shadowRoot!.querySelector('.banner[role="alert"]')?.textContent ?? '';
+    expect(banner).to.contain('planar-with-imu.json').and.to.contain(`sensors[${planar.sensors.length - 1}]`);
+    expect(app.store.document.title).to.equal(EXAMPLES[0].document.title);
+  });
+
   it('refuses a planar-only sensor in a 3-D file with a message naming its path, keeping the open budget', async () => {
     const app = await droneApp();
     const bad = structuredClone(app.store.document) as unknown as InertialBudgetDocument;
     (bad.sensors as unknown[]).push({ id: 'cmp', kind: 'compass', rate: { value: 10, unit: 'Hz' }, sources: [] });
-    const input = app.shadowRoot!.querySelector<HTMLInputElement>('label.file input')!;
-    const files = new DataTransfer();
-    files.items.add(new File([JSON.stringify(bad)], 'bad-drone.json', { type: 'application/json' }));
-    input.files = files.files;
-    input.dispatchEvent(new Event('change'));
-    await new Promise((r) => setTimeout(r, 300));
-    await app.updateComplete;
+    await openFile(app, new File([JSON.stringify(bad)], 'bad-drone.json', { type: 'application/json' }));
     const banner = app.shadowRoot!.querySelector('.banner[role="alert"]')?.textContent ?? '';
     expect(banner).to.contain('bad-drone.json').and.to.contain('sensors[4]');
     expect(doc(app).sensors.length).to.equal(4);
