@@ -28,7 +28,7 @@ type ImuKind = (typeof IMU_ROW_KINDS)[number];
 export class SlImuGrid extends LitElement {
   static override styles = [editorStyles, css`
     :host { display: block; }
-    col.id { width: 12%; } col.inst { width: 15%; } col.axis { width: 9%; } col.kind { width: 17%; } col.time { width: 19%; } col.del { width: 30px; }
+    col.id { width: 10%; } col.inst { width: 18%; } col.axis { width: 7%; } col.kind { width: 18%; } col.time { width: 18%; } col.del { width: 30px; }
     td.problem-row { padding: 0 4px 4px; }
   `];
 
