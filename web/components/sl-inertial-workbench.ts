@@ -1,8 +1,8 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property, state } from 'lit/decorators.js';
-import type { AidingKind, ViewResult } from '../../src';
+import type { AidingKind, AnyBudgetDocument, ViewResult } from '../../src';
 import {
-  AIDING_KIND_NAMES, AIDING_PAGE_SPECS, IMU_SENSOR_KIND, INERTIAL_REQUIREMENT_QUANTITIES, LEVER_ARM_KINDS, inertialLimitDimension, uniqueId,
+  AIDING_KIND_NAMES, AIDING_PAGE_SPECS, IMU_SENSOR_KIND, isInertialDocument, INERTIAL_REQUIREMENT_QUANTITIES, LEVER_ARM_KINDS, inertialLimitDimension, uniqueId,
 } from '../../src';
 import type { RequirementModel } from './sl-requirement-table';
 import type { DocumentStore } from '../state/document-store';
@@ -53,7 +53,8 @@ export class SlInertialWorkbench extends LitElement {
     super.disconnectedCallback();
   }
 
-  private readonly changed = () => this.requestUpdate();
+  // A planar document (undoing the load of a 3-D example) goes to sl-workbench; this one is about to leave the page.
+  private readonly changed = () => (isInertialDocument(this.store.document as AnyBudgetDocument) ? this.requestUpdate() : undefined);
 
   override render() {
     const blocked = this.view?.blocked;

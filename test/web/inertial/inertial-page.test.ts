@@ -168,6 +168,17 @@ describe('the page on a 3-D budget', function () {
     expect(app.compute.view!.blocked).to.equal(undefined);
   });
 
+  it('goes back to the planar editors when loading the 3-D example is undone', async () => {
+    const app = await droneApp();
+    app.store.undo();
+    await app.updateComplete;
+    await computed3d(app);
+    expect(app.store.document.title).to.equal(EXAMPLES[0].document.title);
+    expect(app.shadowRoot!.querySelector('sl-workbench')).to.exist;
+    expect(app.shadowRoot!.querySelector('sl-inertial-workbench')).to.equal(null);
+    expect(app.compute.view!.result).to.exist;
+  });
+
   it('refuses an IMU in a planar file with a message naming its path, keeping the open budget', async () => {
     const app = await freshApp();
     const planar = structuredClone(EXAMPLES[0].document);
