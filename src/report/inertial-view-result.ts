@@ -22,8 +22,12 @@ import { MAX_CHART_POINTS, type RequirementCurve, type ViewResult } from './view
 
 /** Display unit and dimension of each SI unit of the 3-D outputs and calibration states. */
 const DISPLAY: Record<string, { unit: string; dimension: DimensionName }> = {
-  m: { unit: 'm', dimension: 'length' }, 'm/s': { unit: 'm/s', dimension: 'speed' }, rad: { unit: 'deg', dimension: 'angle' },
-  'rad/s': { unit: 'deg/h', dimension: 'angular-rate' }, 'm/s²': { unit: 'mg', dimension: 'acceleration' }, '1': { unit: 'ppm', dimension: 'ratio' },
+  m: { unit: 'm', dimension: 'length' },
+  'm/s': { unit: 'm/s', dimension: 'speed' },
+  rad: { unit: 'deg', dimension: 'angle' },
+  'rad/s': { unit: 'deg/h', dimension: 'angular-rate' },
+  'm/s²': { unit: 'mg', dimension: 'acceleration' },
+  '1': { unit: 'ppm', dimension: 'ratio' },
 };
 
 /** The display unit of an SI unit and the factor from SI to it (SI itself when the table lacks it). */
@@ -108,12 +112,25 @@ function viewVerdict(b: InertialBudget, r: RequirementResult<string>, path: stri
   const values = inertialLevelValues(b, r.quantity, r.level);
   const k = b.rows.findIndex((row, i) => row.tS >= r.windowStartS && row.tS <= r.windowEndS && values[i] > limitSI);
   return {
-    id: r.id, quantity: r.quantity, level: r.level, pass: r.verdict === 'pass', limit: r.limit.value, unit: r.limit.unit,
-    worst: r.worstValue, worstAtS: r.worstTimeS, ...(k >= 0 && { firstExceedS: b.rows[k].tS }), windowS: [r.windowStartS, r.windowEndS], path,
+    id: r.id,
+    quantity: r.quantity,
+    level: r.level,
+    pass: r.verdict === 'pass',
+    limit: r.limit.value,
+    unit: r.limit.unit,
+    worst: r.worstValue,
+    worstAtS: r.worstTimeS,
+    ...(k >= 0 && { firstExceedS: b.rows[k].tS }),
+    windowS: [r.windowStartS, r.windowEndS],
+    path,
   };
 }
 
-function buildView(doc: InertialBudgetDocument, sheet: InertialSheetEvaluation, result: InertialBudgetResult): { inertial: InertialView; curves: RequirementCurve[] } {
+function buildView(
+  doc: InertialBudgetDocument,
+  sheet: InertialSheetEvaluation,
+  result: InertialBudgetResult,
+): { inertial: InertialView; curves: RequirementCurve[] } {
   const input = sheet.input!;
   const b = result.budget;
   const steps = keptSteps(b.rows.length, Math.ceil(b.rows.length / MAX_CHART_POINTS));
@@ -124,7 +141,10 @@ function buildView(doc: InertialBudgetDocument, sheet: InertialSheetEvaluation, 
     const { unit, factor: f } = display(s.unitSI);
     lines[s.id] = { id: s.id, label: s.label, unit, values: keep(s.sigma, f) };
     shares[s.id] = s.varianceBySource.map((v, i) => ({
-      sourceId: b.model.sources[i].id, label: b.model.sources[i].label, path: ownerPath(doc, b.model.sources[i].id), variance: keep(v, f * f),
+      sourceId: b.model.sources[i].id,
+      label: b.model.sources[i].label,
+      path: ownerPath(doc, b.model.sources[i].id),
+      variance: keep(v, f * f),
     }));
   }
   lines.cep = { id: 'cep', label: 'CEP (horizontal, 50 %)', unit: 'm', values: keep(b.cepM) };
@@ -133,17 +153,32 @@ function buildView(doc: InertialBudgetDocument, sheet: InertialSheetEvaluation, 
     const { unit, factor } = display(b.model.states.find((s) => s.name === name)?.unitSI ?? '1');
     return { id: name, label: name, unit, values: keep(sigma, factor) };
   });
-  const verdicts = result.requirements.map((r, i) => viewVerdict(b, r, `requirements[${sheet.indexMap.requirements[i]}]`));
+  const verdicts = result.requirements.map((r, i) =>
+    viewVerdict(b, r, `requirements[${sheet.indexMap.requirements[i]}]`),
+  );
   const curves: RequirementCurve[] = result.requirements.map((r, i) => {
     const perSI = fromSI(1, r.limit.unit, inertialLimitDimension(r.quantity), verdicts[i].path);
-    return { id: r.id, quantity: r.quantity, level: r.level, limit: r.limit.value, unit: r.limit.unit, values: keep(inertialLevelValues(b, r.quantity, r.level), perSI) };
+    return {
+      id: r.id,
+      quantity: r.quantity,
+      level: r.level,
+      limit: r.limit.value,
+      unit: r.limit.unit,
+      values: keep(inertialLevelValues(b, r.quantity, r.level), perSI),
+    };
   });
   const distance = horizontalDistance(b);
   const inertial: InertialView = {
-    t: keep(Float64Array.from(b.rows, (r) => r.tS)), lines, calibration, shares, verdicts,
+    t: keep(Float64Array.from(b.rows, (r) => r.tS)),
+    lines,
+    calibration,
+    shares,
+    verdicts,
     path: {
-      north: keep(Float64Array.from(b.rows, (r) => r.northM)), east: keep(Float64Array.from(b.rows, (r) => r.eastM)),
-      height: keep(Float64Array.from(b.rows, (r) => r.heightM)), distanceM: keep(distance),
+      north: keep(Float64Array.from(b.rows, (r) => r.northM)),
+      east: keep(Float64Array.from(b.rows, (r) => r.eastM)),
+      height: keep(Float64Array.from(b.rows, (r) => r.heightM)),
+      distanceM: keep(distance),
     },
     outages: inertialOutages(input),
     issues: b.run.issues.map((i) => `${i.kind} at ${i.tS} s: ${i.detail}`),
@@ -153,9 +188,14 @@ function buildView(doc: InertialBudgetDocument, sheet: InertialSheetEvaluation, 
 
 function inertialOutages(input: NonNullable<InertialSheetEvaluation['input']>): InertialView['outages'] {
   const seconds = (q: { value: number; unit: string }, p: string) => toSI(q.value, q.unit, 'time', p);
-  return input.aiding.flatMap((s) => (s.outages ?? []).map((o, j) => ({
-    sensorId: s.id, id: o.id ?? String(j + 1), startS: seconds(o.start, s.id), endS: seconds(o.end, s.id),
-  })));
+  return input.aiding.flatMap((s) =>
+    (s.outages ?? []).map((o, j) => ({
+      sensorId: s.id,
+      id: o.id ?? String(j + 1),
+      startS: seconds(o.start, s.id),
+      endS: seconds(o.end, s.id),
+    })),
+  );
 }
 
 /**
@@ -164,19 +204,37 @@ function inertialOutages(input: NonNullable<InertialSheetEvaluation['input']>): 
  * comes back as `blocked` with the document path of the field and as an
  * error on that cell, so the page shows it in place and keeps the text.
  */
-export function inertialViewFromSheet(doc: InertialBudgetDocument, evaluated: InertialSheetEvaluation, options: { contributions?: boolean } = {}): ViewResult {
-  const a = analyseInertialDocument(doc, [], { evaluate: () => evaluated, contributions: options.contributions !== false, report: false });
+export function inertialViewFromSheet(
+  doc: InertialBudgetDocument,
+  evaluated: InertialSheetEvaluation,
+  options: { contributions?: boolean } = {},
+): ViewResult {
+  const a = analyseInertialDocument(doc, [], {
+    evaluate: () => evaluated,
+    contributions: options.contributions !== false,
+    report: false,
+  });
   const sheet = a.sheet;
   const base: ViewResult = {
-    title: doc.title, caution: CAUTION, cellErrors: sheet.cellErrors, omitted: sheet.omitted,
-    cellValues: Object.fromEntries(sheet.cellValues), curves: [],
+    title: doc.title,
+    caution: CAUTION,
+    cellErrors: sheet.cellErrors,
+    omitted: sheet.omitted,
+    cellValues: Object.fromEntries(sheet.cellValues),
+    curves: [],
   };
   if (!a.budget || !sheet.input) {
     const blocked = a.blocked ?? { message: 'nothing to compute' };
-    // A refusal at a cell is also that cell's error (the path names the cell), so the page shows it in place and keeps what was typed.
+    // A refusal at a cell is also that cell's error (the path names the cell), so the page shows it in place and
+    // keeps what was typed.
     const path = blocked.path;
     const message = path ? `${path}: ${blocked.message}` : blocked.message;
-    const cellErrors = path ? [...base.cellErrors, { location: { path, field: path.split('.').slice(-2).join('.') }, kind: 'other' as const, message }] : base.cellErrors;
+    const cellErrors = path
+      ? [
+          ...base.cellErrors,
+          { location: { path, field: path.split('.').slice(-2).join('.') }, kind: 'other' as const, message },
+        ]
+      : base.cellErrors;
     return { ...base, cellErrors, blocked: { message, ...(path && { path }) } };
   }
   const { inertial, curves } = buildView(doc, sheet, a.budget);

@@ -18,20 +18,38 @@ const v = full.inertial!;
 describe('the 3-D view of the survey drone', () => {
   it('has every 3-D line, CEP and R95 in display units, thinned to at most 1500 points', () => {
     expect(full.blocked).toBeUndefined();
-    for (const id of ['north', 'east', 'down', 'height', 'drms', 'velocityNorth', 'velocityEast', 'velocityDown', 'roll', 'pitch', 'yaw', 'cep', 'r95']) {
+    for (const id of [
+      'north',
+      'east',
+      'down',
+      'height',
+      'drms',
+      'velocityNorth',
+      'velocityEast',
+      'velocityDown',
+      'roll',
+      'pitch',
+      'yaw',
+      'cep',
+      'r95',
+    ]) {
       expect(v.lines[id]?.values.length, id).toBe(v.t.length);
     }
     expect(v.t.length).toBeLessThanOrEqual(1500);
     expect([v.lines.yaw.unit, v.lines.height.unit, v.lines.velocityDown.unit]).toEqual(['deg', 'm', 'm/s']);
     // The start tilt is 0.5 deg per axis (the document); with level attitude roll and pitch read it directly at t = 0.
     expect(v.lines.roll.values[0]).toBeCloseTo(0.5, 6);
-    // R95 of a circular normal is 2.4477 σ per axis (Rayleigh, sqrt(-2 ln 0.05)); DRMS is σ√2: R95 / DRMS ≤ 2.4477/√2 for any ellipse.
+    // R95 of a circular normal is 2.4477 σ per axis (Rayleigh, sqrt(-2 ln 0.05)); DRMS is σ√2: R95 / DRMS ≤
+    // 2.4477/√2 for any ellipse.
     const k = v.t.length - 1;
-    expect(v.lines.r95.values[k] / v.lines.drms.values[k]).toBeLessThanOrEqual(Math.sqrt(-2 * Math.log(0.05)) / Math.SQRT2 + 1e-9);
+    expect(v.lines.r95.values[k] / v.lines.drms.values[k]).toBeLessThanOrEqual(
+      Math.sqrt(-2 * Math.log(0.05)) / Math.SQRT2 + 1e-9,
+    );
   });
 
   it('draws the path of the mission: 1290 m flown, 40 m climbed from 210 m', () => {
-    // Kinematics of the legs: 2 ramps of 4 s from 0 to 6 m/s (12 m each), 96 s + 15 s + 100 s at 6 m/s; climb 20 s at 2 m/s.
+    // Kinematics of the legs: 2 ramps of 4 s from 0 to 6 m/s (12 m each), 96 s + 15 s + 100 s at 6 m/s; climb 20 s
+    // at 2 m/s.
     const flown = 12 + 96 * 6 + 15 * 6 + 100 * 6 + 12;
     expect(v.path.distanceM[v.path.distanceM.length - 1]).toBeCloseTo(flown, 0);
     expect(Math.max(...v.path.height)).toBeCloseTo(250, 6);
@@ -42,8 +60,10 @@ describe('the 3-D view of the survey drone', () => {
     const doc = drone();
     for (const e of v.shares.height) {
       if (e.sourceId.startsWith('mission.')) expect(e.path).toBe(e.sourceId);
-      else expect(doc.sensors.flatMap((s, i) => s.sources.map((r, j) => [`${s.id}.${r.id}`, `sensors[${i}].sources[${j}]`])))
-        .toContainEqual([e.sourceId, e.path]);
+      else
+        expect(
+          doc.sensors.flatMap((s, i) => s.sources.map((r, j) => [`${s.id}.${r.id}`, `sensors[${i}].sources[${j}]`])),
+        ).toContainEqual([e.sourceId, e.path]);
     }
     for (const q of ['height', 'yaw', 'drms']) {
       const k = v.t.length - 1;
@@ -55,7 +75,9 @@ describe('the 3-D view of the survey drone', () => {
   it('gives each requirement a verdict whose first exceedance agrees with the lines', () => {
     for (const r of v.verdicts) {
       const curve = full.curves.find((c) => c.id === r.id)!;
-      const inside = v.t.map((t, k) => [t, curve.values[k]] as const).filter(([t]) => t >= r.windowS[0] && t <= r.windowS[1]);
+      const inside = v.t
+        .map((t, k) => [t, curve.values[k]] as const)
+        .filter(([t]) => t >= r.windowS[0] && t <= r.windowS[1]);
       expect(Math.max(...inside.map(([, x]) => x)), r.id).toBeLessThanOrEqual(r.worst * (1 + 1e-12));
       expect(r.pass, r.id).toBe(r.firstExceedS === undefined);
       expect(r.pass, r.id).toBe(r.worst <= r.limit);
@@ -82,11 +104,15 @@ describe('bad 3-D input in the view', () => {
   });
 
   it('leaves a zero-velocity window while moving out, in place, and computes the rest', () => {
-    const r = bad((d) => d.sensors.push({
-      id: 'zupt', kind: 'zero-velocity', rate: { value: 10, unit: 'Hz' },
-      windows: [{ start: { value: 50, unit: 's' }, end: { value: 60, unit: 's' } }],
-      sources: [{ id: 'w', kind: 'white-noise', value: 0.01, unit: 'm/s', provenance: 'test', assumed: true }],
-    }));
+    const r = bad((d) =>
+      d.sensors.push({
+        id: 'zupt',
+        kind: 'zero-velocity',
+        rate: { value: 10, unit: 'Hz' },
+        windows: [{ start: { value: 50, unit: 's' }, end: { value: 60, unit: 's' } }],
+        sources: [{ id: 'w', kind: 'white-noise', value: 0.01, unit: 'm/s', provenance: 'test', assumed: true }],
+      }),
+    );
     expect(r.omitted).toContainEqual({ path: 'sensors[4].windows[0]', what: 'window 1 of zupt' });
     expect(r.cellErrors.find((e) => e.location.path === 'sensors[4].windows[0]')?.message).toContain('moves');
     expect(r.inertial).toBeDefined();

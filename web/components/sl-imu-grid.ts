@@ -26,11 +26,35 @@ type ImuKind = (typeof IMU_ROW_KINDS)[number];
  */
 @customElement('sl-imu-grid')
 export class SlImuGrid extends LitElement {
-  static override styles = [editorStyles, css`
-    :host { display: block; }
-    col.id { width: 10%; } col.inst { width: 18%; } col.axis { width: 7%; } col.kind { width: 18%; } col.time { width: 18%; } col.del { width: 30px; }
-    td.problem-row { padding: 0 4px 4px; }
-  `];
+  static override styles = [
+    editorStyles,
+    css`
+      :host {
+        display: block;
+      }
+      col.id {
+        width: 10%;
+      }
+      col.inst {
+        width: 18%;
+      }
+      col.axis {
+        width: 7%;
+      }
+      col.kind {
+        width: 18%;
+      }
+      col.time {
+        width: 18%;
+      }
+      col.del {
+        width: 30px;
+      }
+      td.problem-row {
+        padding: 0 4px 4px;
+      }
+    `,
+  ];
 
   @property({ attribute: false }) store!: DocumentStore;
   @property({ attribute: false }) view?: ViewResult;
@@ -42,14 +66,36 @@ export class SlImuGrid extends LitElement {
     const base = `sensors[${this.sensor}]`;
     return html`
       <table aria-label=${`${s.id} rows`}>
-        <colgroup><col class="id" /><col class="inst" /><col class="axis" /><col class="kind" /><col /><col class="time" /><col class="del" /></colgroup>
-        <thead><tr><th>row</th><th>instrument</th><th>axis</th><th>kind</th><th>magnitude</th><th>correlation time</th><th><span class="sr-only">delete</span></th></tr></thead>
-        <tbody>${s.sources.map((row, j) => this.row(row, `${base}.sources[${j}]`, j))}</tbody>
+        <colgroup>
+          <col class="id" />
+          <col class="inst" />
+          <col class="axis" />
+          <col class="kind" />
+          <col />
+          <col class="time" />
+          <col class="del" />
+        </colgroup>
+        <thead>
+          <tr>
+            <th>row</th>
+            <th>instrument</th>
+            <th>axis</th>
+            <th>kind</th>
+            <th>magnitude</th>
+            <th>correlation time</th>
+            <th><span class="sr-only">delete</span></th>
+          </tr>
+        </thead>
+        <tbody>
+          ${s.sources.map((row, j) => this.row(row, `${base}.sources[${j}]`, j))}
+        </tbody>
       </table>
       <div class="bar">
         <button @click=${() => this.add('gyro')}>Add gyro row</button>
         <button @click=${() => this.add('accelerometer')}>Add accelerometer row</button>
-        <span class="hint">axis: all, x (forward), y (right) or z (down); an axis row replaces the all-axes row of its kind there</span>
+        <span class="hint"
+          >axis: all, x (forward), y (right) or z (down); an axis row replaces the all-axes row of its kind there</span
+        >
       </div>
     `;
   }
@@ -61,23 +107,81 @@ export class SlImuGrid extends LitElement {
     const problem = itemProblem(this.view, path);
     return html`
       <tr data-row=${row.id}>
-        <td><sl-cell text .content=${row.id} label=${`${name} id`} @sl-commit=${(e: CustomEvent<CellCommitDetail>) => this.rename(e, j)}></sl-cell></td>
-        <td><select aria-label=${`${name} instrument`} @change=${(e: Event) => this.setInstrument(j, (e.target as HTMLSelectElement).value as Instrument)}>
-          ${(['gyro', 'accelerometer'] as const).map((i) => html`<option value=${i} ?selected=${i === instrument}>${i}</option>`)}
-        </select></td>
-        <td><sl-cell text class="axis" .content=${row.axis ?? 'all'} label=${`${name} axis`}
-          @sl-commit=${(e: CustomEvent<CellCommitDetail>) => this.setAxis(e, j, path)}></sl-cell></td>
-        <td><select aria-label=${`${name} kind`} @change=${(e: Event) => this.setKind(j, (e.target as HTMLSelectElement).value as ImuKind)}>
-          ${IMU_ROW_KINDS.map((k) => html`<option value=${k} ?selected=${k === row.kind}>${k}</option>`)}
-        </select></td>
-        <td><sl-quantity .store=${this.store} .view=${this.view} path=${path} label=${`${name} magnitude`} .dimensions=${dims}></sl-quantity></td>
-        <td>${row.kind === 'bias-instability' || row.correlationTime
-          ? html`<sl-quantity .store=${this.store} .view=${this.view} path=${`${path}.correlationTime`} label=${`${name} correlation time`}
-              .dimensions=${['time']} optional></sl-quantity>`
-          : nothing}</td>
-        <td><button class="icon" aria-label=${`Delete row ${name}`} title="Delete the row" @click=${() => this.removeRow(j)}>×</button></td>
+        <td>
+          <sl-cell
+            text
+            .content=${row.id}
+            label=${`${name} id`}
+            @sl-commit=${(e: CustomEvent<CellCommitDetail>) => this.rename(e, j)}
+          ></sl-cell>
+        </td>
+        <td>
+          <select
+            aria-label=${`${name} instrument`}
+            @change=${(e: Event) => this.setInstrument(j, (e.target as HTMLSelectElement).value as Instrument)}
+          >
+            ${(['gyro', 'accelerometer'] as const).map((i) =>
+                html`<option value=${i} ?selected=${i === instrument}>${i}</option>`)}
+          </select>
+        </td>
+        <td>
+          <sl-cell
+            text
+            class="axis"
+            .content=${row.axis ?? 'all'}
+            label=${`${name} axis`}
+            @sl-commit=${(e: CustomEvent<CellCommitDetail>) => this.setAxis(e, j, path)}
+          ></sl-cell>
+        </td>
+        <td>
+          <select
+            aria-label=${`${name} kind`}
+            @change=${(e: Event) => this.setKind(j, (e.target as HTMLSelectElement).value as ImuKind)}
+          >
+            ${IMU_ROW_KINDS.map((k) => html`<option value=${k} ?selected=${k === row.kind}>${k}</option>`)}
+          </select>
+        </td>
+        <td>
+          <sl-quantity
+            .store=${this.store}
+            .view=${this.view}
+            path=${path}
+            label=${`${name} magnitude`}
+            .dimensions=${dims}
+          ></sl-quantity>
+        </td>
+        <td>
+          ${
+            row.kind === 'bias-instability' || row.correlationTime
+              ? html`<sl-quantity
+                  .store=${this.store}
+                  .view=${this.view}
+                  path=${`${path}.correlationTime`}
+                  label=${`${name} correlation time`}
+                  .dimensions=${['time']}
+                  optional
+                ></sl-quantity>`
+              : nothing
+          }
+        </td>
+        <td>
+          <button
+            class="icon"
+            aria-label=${`Delete row ${name}`}
+            title="Delete the row"
+            @click=${() => this.removeRow(j)}
+          >
+            ×
+          </button>
+        </td>
       </tr>
-      ${problem ? html`<tr><td colspan="7" class="problem-row"><span class="problem" role="alert">${problem}</span></td></tr>` : nothing}
+      ${
+        problem
+          ? html`<tr>
+              <td colspan="7" class="problem-row"><span class="problem" role="alert">${problem}</span></td>
+            </tr>`
+          : nothing
+      }
     `;
   }
 
@@ -87,7 +191,9 @@ export class SlImuGrid extends LitElement {
 
   private setAxis(e: CustomEvent<CellCommitDetail>, j: number, path: string): void {
     if (!e.detail.changed) return;
-    const typed = String(e.detail.content ?? '').trim().toLowerCase();
+    const typed = String(e.detail.content ?? '')
+      .trim()
+      .toLowerCase();
     if (!AXIS_CHOICES.includes(typed) && typed !== '') {
       e.detail.reject(`${path}.axis: "${String(e.detail.content)}" is not an axis; type x, y, z or all`);
       return;
@@ -121,8 +227,11 @@ export class SlImuGrid extends LitElement {
   private rename(e: CustomEvent<CellCommitDetail>, j: number): void {
     const id = String(e.detail.content ?? '').trim();
     if (!e.detail.changed) return;
-    const taken = this.rows().filter((_r, i) => i !== j).map((r) => r.id);
-    if (!/^[A-Za-z_][A-Za-z0-9_]*$/.test(id)) return e.detail.reject('a row id is letters, digits and _, starting with a letter');
+    const taken = this.rows()
+      .filter((_r, i) => i !== j)
+      .map((r) => r.id);
+    if (!/^[A-Za-z_][A-Za-z0-9_]*$/.test(id))
+      return e.detail.reject('a row id is letters, digits and _, starting with a letter');
     if (taken.includes(id)) return e.detail.reject(`"${id}" is used by another row of this sensor`);
     editInertial(this.store, `rename row ${this.rows()[j].id} to ${id}`, (d) => (this.rows(d)[j].id = id));
   }
@@ -132,8 +241,16 @@ export class SlImuGrid extends LitElement {
     editInertial(this.store, `add ${instrument} row`, (d) => {
       const rows = this.rows(d);
       rows.push({
-        id: uniqueId(stem, rows.map((r) => r.id)), kind: 'turn-on-bias', instrument, value: 0,
-        unit: defaultUnit(IMU_ROW_DIMENSIONS[instrument]['turn-on-bias']), provenance: 'added on the page', assumed: true,
+        id: uniqueId(
+          stem,
+          rows.map((r) => r.id),
+        ),
+        kind: 'turn-on-bias',
+        instrument,
+        value: 0,
+        unit: defaultUnit(IMU_ROW_DIMENSIONS[instrument]['turn-on-bias']),
+        provenance: 'added on the page',
+        assumed: true,
       } as InertialRow);
     });
   }

@@ -13,10 +13,22 @@ import { timeChartOptions } from '../charts/time-chart-options';
 @customElement('sl-inertial-chart')
 export class SlInertialChart extends LitElement {
   static override styles = css`
-    :host { display: block; }
-    figure { margin: 0; }
-    figcaption { font-size: 12px; font-weight: 600; color: var(--sl-ink); margin-bottom: 2px; }
-    .plot { position: relative; height: 220px; }
+    :host {
+      display: block;
+    }
+    figure {
+      margin: 0;
+    }
+    figcaption {
+      font-size: 12px;
+      font-weight: 600;
+      color: var(--sl-ink);
+      margin-bottom: 2px;
+    }
+    .plot {
+      position: relative;
+      height: 220px;
+    }
   `;
 
   @property({ attribute: false }) view?: ViewResult;
@@ -32,11 +44,12 @@ export class SlInertialChart extends LitElement {
   }
 
   override render() {
-    return html`
-      <figure>
-        <figcaption>${this.spec.title} over time</figcaption>
-        <div class="plot"><canvas role="img" aria-label=${`${this.spec.title} over time, with requirement limits and outages`}></canvas></div>
-      </figure>`;
+    return html` <figure>
+      <figcaption>${this.spec.title} over time</figcaption>
+      <div class="plot">
+        <canvas role="img" aria-label=${`${this.spec.title} over time, with requirement limits and outages`}></canvas>
+      </div>
+    </figure>`;
   }
 
   override updated(): void {

@@ -11,8 +11,15 @@ export const DRONE = 'survey-drone.json';
 
 /** Waits until the view matches the document and holds every source's share (the worker's second answer). */
 export async function computed3d(app: SlApp): Promise<void> {
-  await waitUntil(() => app.compute.status === 'complete' && !app.compute.stale && app.compute.view !== undefined
-    && !app.compute.view.contributionsPending, '3-D results', { timeout: 90000 });
+  await waitUntil(
+    () =>
+      app.compute.status === 'complete' &&
+      !app.compute.stale &&
+      app.compute.view !== undefined &&
+      !app.compute.view.contributionsPending,
+    '3-D results',
+    { timeout: 90000 },
+  );
   await settle(app);
 }
 
@@ -29,7 +36,11 @@ export async function droneApp(): Promise<SlApp> {
 }
 
 /** Types `text` into the cell labelled `label` and presses Enter; returns the cell and its field. */
-export async function typeInto(root: Element, label: string, text: string): Promise<{ cell: SlCell; input: HTMLInputElement }> {
+export async function typeInto(
+  root: Element,
+  label: string,
+  text: string,
+): Promise<{ cell: SlCell; input: HTMLInputElement }> {
   const cell = deepQuery<SlCell>(root, `sl-cell[label="${label}"]`);
   const input = cell.shadowRoot!.querySelector('input')!;
   input.focus();

@@ -31,9 +31,10 @@ describe('the page on a 3-D budget', function () {
   this.timeout(240_000);
 
   const doc = (app: Awaited<ReturnType<typeof droneApp>>) => app.store.document as unknown as InertialBudgetDocument;
-  const imuRow = (app: Awaited<ReturnType<typeof droneApp>>, id: string) => doc(app).sensors[0].sources.findIndex((r) => r.id === id);
+  const imuRow = (app: Awaited<ReturnType<typeof droneApp>>, id: string) =>
+    doc(app).sensors[0].sources.findIndex((r) => r.id === id);
 
-  it('loads the 3-D example into the 3-D editors, with verdicts, the four σ charts, the plan and the profile', async () => {
+  it('loads the 3-D example into its editors, with verdicts, four σ charts, the plan and the profile', async () => {
     const app = await droneApp();
     expect(doc(app).model).to.equal('inertial');
     expect(app.shadowRoot!.querySelector('sl-workbench')).to.equal(null);
@@ -53,7 +54,7 @@ describe('the page on a 3-D budget', function () {
     expect(deepQuery(app, 'sl-plan-view').shadowRoot!.querySelector('polyline.path')).to.exist;
   });
 
-  it('recomputes after an IMU cell is edited: a ten times larger gyro bias instability drifts further in the outage', async () => {
+  it('recomputes after an IMU cell edit: ten times the gyro bias instability drifts further', async () => {
     const app = await droneApp();
     const before = app.compute.view!.inertial!.verdicts[0].worst;
     await typeInto(app, 'imu.gBi magnitude', '40');
@@ -77,7 +78,7 @@ describe('the page on a 3-D budget', function () {
     expect(doc(app).sensors[0].sources[imuRow(app, 'aBias')].axis).to.equal(undefined);
   });
 
-  it('refuses an axis that is not x, y, z or all with a message naming the field, keeping the typed text', async () => {
+  it('refuses an axis not x, y, z or all, naming the field and keeping the typed text', async () => {
     const app = await droneApp();
     const before = JSON.stringify(app.store.document);
     const j = imuRow(app, 'gBias');
@@ -107,7 +108,7 @@ describe('the page on a 3-D budget', function () {
     expect(input.value).to.equal('-1');
   });
 
-  it('leaves a zero-velocity window while climbing out with a message at the window, keeping the rest computed', async () => {
+  it('leaves a zero-velocity window while climbing out, with its message, and computes the rest', async () => {
     const app = await droneApp();
     const select = deepQuery<HTMLSelectElement>(app, 'select[aria-label="Add an aiding sensor"]');
     select.value = 'zero-velocity';
@@ -119,7 +120,8 @@ describe('the page on a 3-D budget', function () {
     // The new window is 0 to 10 s: the drone climbs then (2 m/s up), so the update cannot hold.
     await computed3d(app);
     await settle(app);
-    const alert = sensor.shadowRoot!.querySelector('table[aria-label="zupt windows"] [role="alert"]')?.textContent ?? '';
+    const alert =
+      sensor.shadowRoot!.querySelector('table[aria-label="zupt windows"] [role="alert"]')?.textContent ?? '';
     expect(alert).to.contain('climb').and.to.contain('stop');
     expect(app.compute.view!.inertial).to.exist;
     expect(app.compute.view!.omitted.map((o) => o.path)).to.deep.equal(['sensors[4].windows[0]']);
@@ -128,7 +130,8 @@ describe('the page on a 3-D budget', function () {
   it('offers the trade units of each instrument and kind, and converts on a unit change', async () => {
     const app = await droneApp();
     const grid = deepQuery(app, 'sl-imu-grid');
-    const units = (label: string) => [...deepQuery<HTMLSelectElement>(grid, `select[aria-label="${label}"]`).options].map((o) => o.value);
+    const units = (label: string) =>
+      [...deepQuery<HTMLSelectElement>(grid, `select[aria-label="${label}"]`).options].map((o) => o.value);
     expect(units('imu.gArw magnitude unit')).to.include.members(['deg/√h', 'deg/s/√Hz', 'mdps/√Hz', 'deg/s']);
     expect(units('imu.aVrw magnitude unit')).to.include.members(['µg/√Hz', 'm/s/√h', 'mg']);
     expect(units('imu.aBias magnitude unit')).to.include.members(['mg', 'µg', 'm/s²']);
@@ -148,7 +151,14 @@ describe('the page on a 3-D budget', function () {
     await settle(app);
     const quantity = deepQuery<HTMLSelectElement>(app, 'select[aria-label="heightHold quantity"]');
     expect(quantity.value).to.equal('height');
-    expect([...quantity.options].map((o) => o.value)).to.include.members(['height', 'roll', 'pitch', 'yaw', 'drms', 'horizontal']);
+    expect([...quantity.options].map((o) => o.value)).to.include.members([
+      'height',
+      'roll',
+      'pitch',
+      'yaw',
+      'drms',
+      'horizontal',
+    ]);
     quantity.value = 'pitch';
     quantity.dispatchEvent(new Event('change'));
     await settle(app);
@@ -156,7 +166,7 @@ describe('the page on a 3-D budget', function () {
     expect(doc(app).requirements![1].limit.unit).to.equal('deg');
   });
 
-  it('offers the 3-D model\'s aiding kinds only when adding a sensor, and adds one', async () => {
+  it("offers the 3-D model's aiding kinds only when adding a sensor, and adds one", async () => {
     const app = await droneApp();
     const select = deepQuery<HTMLSelectElement>(app, 'select[aria-label="Add an aiding sensor"]');
     expect([...select.options].map((o) => o.value).filter(Boolean)).to.deep.equal([...AIDING_KIND_NAMES]);
@@ -185,11 +195,13 @@ describe('the page on a 3-D budget', function () {
     (planar.sensors as unknown[]).push({ id: 'imu', kind: 'imu', rate: { value: 100, unit: 'Hz' }, sources: [] });
     await openFile(app, new File([JSON.stringify(planar)], 'planar-with-imu.json', { type: 'application/json' }));
     const banner = app.shadowRoot!.querySelector('.banner[role="alert"]')?.textContent ?? '';
-    expect(banner).to.contain('planar-with-imu.json').and.to.contain(`sensors[${planar.sensors.length - 1}]`);
+    expect(banner)
+      .to.contain('planar-with-imu.json')
+      .and.to.contain(`sensors[${planar.sensors.length - 1}]`);
     expect(app.store.document.title).to.equal(EXAMPLES[0].document.title);
   });
 
-  it('refuses a planar-only sensor in a 3-D file with a message naming its path, keeping the open budget', async () => {
+  it('refuses a planar-only sensor in a 3-D file, naming its path, keeping the open budget', async () => {
     const app = await droneApp();
     const bad = structuredClone(app.store.document) as unknown as InertialBudgetDocument;
     (bad.sensors as unknown[]).push({ id: 'cmp', kind: 'compass', rate: { value: 10, unit: 'Hz' }, sources: [] });
