@@ -13,6 +13,7 @@ import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
 import { blockedWithin, itemProblem } from '../grid/view-lookup';
 import { editInertial, inertialDoc } from '../inertial/inertial-store';
+import { quantityField } from '../inertial/quantity-field';
 import './sl-quantity';
 
 /**
@@ -80,14 +81,7 @@ export class SlAidingSensor extends LitElement {
     const base = `sensors[${this.sensor}]`;
     const vertical = VERTICAL_SIGMA_KINDS.includes(kind);
     const q = (path: string, label: string, dims: string[], optional = false) =>
-      html` <sl-quantity
-        .store=${this.store}
-        .view=${this.view}
-        path=${path}
-        label=${label}
-        .dimensions=${dims}
-        ?optional=${optional}
-      ></sl-quantity>`;
+      quantityField(this.store, this.view, path, label, dims, optional);
     const timed = spec?.rows.multipath !== undefined;
     const armProblem = blockedWithin(this.view, `${base}.leverArm`);
     return html`
@@ -183,14 +177,7 @@ export class SlAidingSensor extends LitElement {
             ? html`<td>
                 ${
                   row.kind === 'multipath'
-                    ? html`<sl-quantity
-                        .store=${this.store}
-                        .view=${this.view}
-                        path=${`${path}.correlationTime`}
-                        label=${`${name} correlation time`}
-                        .dimensions=${['time']}
-                        optional
-                      ></sl-quantity>`
+                    ? quantityField(this.store, this.view, `${path}.correlationTime`, `${name} correlation time`, ['time'], true)
                     : nothing
                 }
               </td>`

@@ -6,6 +6,7 @@ import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
 import { itemProblem } from '../grid/view-lookup';
 import { editInertial, inertialDoc } from '../inertial/inertial-store';
+import { quantityField } from '../inertial/quantity-field';
 import type { CellCommitDetail } from './sl-cell';
 import './sl-cell';
 import './sl-quantity';
@@ -153,14 +154,7 @@ export class SlImuGrid extends LitElement {
         <td>
           ${
             row.kind === 'bias-instability' || row.correlationTime
-              ? html`<sl-quantity
-                  .store=${this.store}
-                  .view=${this.view}
-                  path=${`${path}.correlationTime`}
-                  label=${`${name} correlation time`}
-                  .dimensions=${['time']}
-                  optional
-                ></sl-quantity>`
+              ? quantityField(this.store, this.view, `${path}.correlationTime`, `${name} correlation time`, ['time'], true)
               : nothing
           }
         </td>

@@ -3,6 +3,7 @@ import { customElement, property, state } from 'lit/decorators.js';
 import type { PlanView, ViewResult } from '../../src';
 import { num, seconds } from '../charts/findings-text';
 import { levelText } from '../charts/findings-text';
+import { tabBarStyles } from '../inertial/quantity-field';
 import './sl-inertial-chart';
 import './sl-inertial-shares';
 import './sl-plan-view';
@@ -23,38 +24,15 @@ const TABS: [Tab, string][] = [
  */
 @customElement('sl-inertial-findings')
 export class SlInertialFindings extends LitElement {
-  static override styles = css`
+  static override styles = [
+    tabBarStyles,
+    css`
     :host {
       display: block;
       padding: 0 12px 24px;
       font-size: 13px;
       color: var(--sl-ink);
       background: var(--sl-paper);
-    }
-    [role='tablist'] {
-      display: flex;
-      gap: 2px;
-      border-bottom: 2px solid var(--sl-ink);
-      position: sticky;
-      top: 0;
-      background: var(--sl-paper);
-      padding-top: 8px;
-      z-index: 2;
-    }
-    [role='tab'] {
-      font: inherit;
-      border: 1px solid var(--sl-rule);
-      border-bottom: none;
-      border-radius: var(--sl-radius) var(--sl-radius) 0 0;
-      padding: 5px 14px;
-      background: var(--sl-paper);
-      color: var(--sl-ink);
-      cursor: pointer;
-    }
-    [role='tab'][aria-selected='true'] {
-      background: var(--sl-ink);
-      color: var(--sl-paper);
-      border-color: var(--sl-ink);
     }
     h3 {
       font-size: 13px;
@@ -107,7 +85,8 @@ export class SlInertialFindings extends LitElement {
     h3 span.unit-symbol {
       text-transform: none;
     }
-  `;
+  `,
+  ];
 
   @property({ attribute: false }) view?: ViewResult;
   @property({ type: Boolean }) stale = false;

@@ -6,6 +6,7 @@ import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
 import { itemProblem } from '../grid/view-lookup';
 import { editInertial, inertialDoc } from '../inertial/inertial-store';
+import { quantityField } from '../inertial/quantity-field';
 import './sl-quantity';
 
 /** Attitude rules of the 3-D path (budgets/FORMAT.md, "3-D budgets", Mission), with what each means. */
@@ -69,14 +70,7 @@ export class SlInertialMission extends LitElement {
   override render() {
     const m = inertialDoc(this.store).mission;
     const q = (path: string, label: string, dims: string[], optional = false) =>
-      html` <sl-quantity
-        .store=${this.store}
-        .view=${this.view}
-        path=${path}
-        label=${label}
-        .dimensions=${dims}
-        ?optional=${optional}
-      ></sl-quantity>`;
+      quantityField(this.store, this.view, path, label, dims, optional);
     const startCells = [
       ['north', 'length'],
       ['east', 'length'],

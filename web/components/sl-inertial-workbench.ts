@@ -15,6 +15,7 @@ import type { RequirementModel } from './sl-requirement-table';
 import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
 import { editInertial, inertialDoc } from '../inertial/inertial-store';
+import { quantityField, tabBarStyles } from '../inertial/quantity-field';
 import './sl-aiding-sensor';
 import './sl-imu-grid';
 import './sl-inertial-mission';
@@ -46,34 +47,12 @@ const TABS: [Tab, string][] = [
 export class SlInertialWorkbench extends LitElement {
   static override styles = [
     editorStyles,
+    tabBarStyles,
     css`
       :host {
         display: block;
         padding: 0 12px 24px;
         background: var(--sl-paper);
-      }
-      [role='tablist'] {
-        display: flex;
-        gap: 2px;
-        border-bottom: 2px solid var(--sl-ink);
-        position: sticky;
-        top: 0;
-        background: var(--sl-paper);
-        padding-top: 8px;
-        z-index: 2;
-      }
-      [role='tab'] {
-        border: 1px solid var(--sl-rule);
-        border-bottom: none;
-        border-radius: var(--sl-radius) var(--sl-radius) 0 0;
-        padding: 5px 14px;
-        font-size: 13px;
-        background: var(--sl-paper);
-      }
-      [role='tab'][aria-selected='true'] {
-        background: var(--sl-ink);
-        color: var(--sl-paper);
-        border-color: var(--sl-ink);
       }
       .model {
         font-size: 12px;
