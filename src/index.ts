@@ -109,3 +109,10 @@ export type { FilterDesignJson } from './report/filter-design-json';
 // 3-D (inertial) budget documents: their workbook and evaluation to InertialBudgetInput.
 export { CellSheet, InertialWorkbook, evaluateInertialDocument } from './sheet';
 export type { InertialIndexMap, InertialSheetEvaluation, ReadCells } from './sheet';
+
+// The page's view of 3-D budgets: series, shares, verdicts and path of an inertial document.
+export {
+  inertialViewFromSheet, type InertialView, type InertialLine, type InertialShareEntry, type InertialViewVerdict,
+} from './report/inertial-view-result';
+export { INERTIAL_REQUIREMENT_QUANTITIES } from './inertial/inertial-quantities';
+export { inertialLimitDimension } from './budget/inertial-requirements';

@@ -10,3 +10,4 @@ export { INERTIAL_QUANTITIES, type InertialQuantity } from './inertial-quantitie
 export { sphericalErrorProbableM, probabilityInsideSphere } from './sphere-probability';
 export type { InertialModel, InertialSource, InertialState } from './inertial-model';
 export { AIDING_KIND_NAMES, LEVER_ARM_KINDS, VERTICAL_SIGMA_KINDS, WINDOW_KINDS } from './inertial-input';
+export { IMU_ROW_KINDS, IMU_ROW_DIMENSIONS, AIDING_PAGE_SPECS, type AidingPageSpec } from './row-dimensions';

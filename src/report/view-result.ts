@@ -13,6 +13,7 @@ import { CAUTION } from './caution';
 import { hasFilterDesign } from '../suboptimal/filter-rows';
 import { computeFilterDesign } from '../suboptimal/compute-filter-design';
 import { buildFilterDesignJson } from './filter-design-json';
+import type { InertialView } from './inertial-view-result';
 
 /** Most points a chart series gets; longer missions are thinned to every n-th step. */
 export const MAX_CHART_POINTS = 1500;
@@ -52,6 +53,8 @@ export interface ViewResult {
   contributionsPending?: boolean;
   curves: RequirementCurve[];
   plan?: PlanView;
+  /** A 3-D budget's series, shares, verdicts and path (inertial-view-result.ts); `result` and `plan` are then absent. */
+  inertial?: InertialView;
 }
 
 /**

@@ -45,11 +45,11 @@ export interface NamedDimension {
 /** The named dimensions. Every `si` and `picker` text parses to the entry's dimension (tested). */
 export const DIMENSIONS: Readonly<Record<DimensionName, NamedDimension>> = {
   'angle': { label: 'angle', si: 'rad', picker: ['deg', 'rad', 'mrad', 'arcmin', 'arcsec', 'µrad'], dimension: dimension(0, 1, 0) },
-  'angular-rate': { label: 'angular rate', si: 'rad/s', picker: ['deg/h', 'deg/s', 'rad/s', 'mrad/s'], dimension: dimension(0, 1, -1) },
+  'angular-rate': { label: 'angular rate', si: 'rad/s', picker: ['deg/h', 'deg/s', 'rad/s', 'mrad/s', 'dps', 'mdeg/s'], dimension: dimension(0, 1, -1) },
   'angle-random-walk': {
     label: 'angle random walk',
     si: 'rad/√s',
-    picker: ['deg/√h', 'deg/s/√Hz', 'rad/√s', 'deg/h/√Hz', 'rad/s/√Hz', 'mrad/√s'],
+    picker: ['deg/√h', 'deg/s/√Hz', 'rad/√s', 'deg/h/√Hz', 'rad/s/√Hz', 'mrad/√s', 'mdps/√Hz'],
     dimension: dimension(0, 1, -0.5),
   },
   'rate-random-walk': {

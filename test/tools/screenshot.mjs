@@ -15,8 +15,21 @@ try {
   await page.setViewport({ width, height });
   await page.goto(URL);
   await waitUntilComputed(page);
+  // With EXAMPLE=<file name> (e.g. survey-drone.json), that example from the menu instead of the demo.
+  if (process.env.EXAMPLE) {
+    await page.evaluate((name) => {
+      const app = document.querySelector('sl-app');
+      const select = app.shadowRoot.querySelector('select[aria-label="Load an example budget"]');
+      const option = [...select.options].find((o) => o.dataset.file === name);
+      if (!option) throw new Error(`no example ${name} in the menu`);
+      select.value = option.value;
+      select.dispatchEvent(new Event('change'));
+    }, process.env.EXAMPLE);
+    await new Promise((r) => setTimeout(r, 500));
+    await waitUntilComputed(page, 120000);
+  }
   await new Promise((r) => setTimeout(r, 300)); // let charts draw
-  const file = `.test-results/screenshot-${width}x${height}.png`;
+  const file = `.test-results/screenshot-${width}x${height}${process.env.EXAMPLE ? `-${process.env.EXAMPLE.replace(/\.json$/, '')}` : ''}.png`;
   await page.screenshot({ path: file, fullPage: true });
   console.log(`saved ${file}`);
   // With TABS=1, one more shot per tab pair: workbench tab i beside findings tab i.

@@ -1,7 +1,7 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, state } from 'lit/decorators.js';
 import { SigmaLedgerError } from '../../src';
-import { CAUTION } from '../../src';
+import { CAUTION, isInertialDocument, type AnyBudgetDocument } from '../../src';
 import { DocumentStore } from '../state/document-store';
 import { Autosave } from '../state/autosave';
 import { downloadBudget, offerDownload, readBudgetFile } from '../state/file-io';
@@ -10,6 +10,8 @@ import { ComputeController } from '../compute/compute-controller';
 import { EXAMPLES } from '../examples';
 import './sl-workbench';
 import './sl-findings';
+import './sl-inertial-workbench';
+import './sl-inertial-findings';
 
 /**
  * The page: a header with the document's file actions, undo/redo and the
@@ -39,8 +41,8 @@ export class SlApp extends LitElement {
     .banner { background: var(--sl-error-bg); color: var(--sl-fail); padding: 6px 14px; font-size: 13px; display: flex; gap: 8px; }
     .banner button { margin-left: auto; }
     main { flex: 1; display: grid; grid-template-columns: minmax(0, 11fr) minmax(0, 9fr); min-height: 0; }
-    sl-workbench, sl-findings { min-height: 0; overflow: auto; }
-    sl-workbench { border-right: 1px solid var(--sl-rule); }
+    sl-workbench, sl-findings, sl-inertial-workbench, sl-inertial-findings { min-height: 0; overflow: auto; }
+    sl-workbench, sl-inertial-workbench { border-right: 1px solid var(--sl-rule); }
   `;
 
   /** The open document; public so tests can reach it. */
@@ -79,11 +81,12 @@ export class SlApp extends LitElement {
         <div class="title" title=${this.store.fileName}>${this.store.document.title} · ${this.store.fileName}</div>
         <label class="file" title="Open a budget file (or drop one on the page)">Open…<input type="file" accept=".json,application/json" @change=${this.opened} /></label>
         <button @click=${this.save} title="Save the budget as JSON (the same file the command line reads)">Save</button>
-        <button id="report" ?disabled=${this.reporting} @click=${this.downloadReport}
-          title="Download the design-review report: one HTML file to open, print or file (the same as sigma-ledger report)">${this.reporting ? 'Making report…' : 'Report'}</button>
+        <button id="report" ?disabled=${this.reporting || this.is3d} @click=${this.downloadReport}
+          title=${this.is3d ? 'The design-review report covers planar budgets only so far; save the 3-D budget and run it with sigma-ledger run'
+            : 'Download the design-review report: one HTML file to open, print or file (the same as sigma-ledger report)'}>${this.reporting ? 'Making report…' : 'Report'}</button>
         <select aria-label="Load an example budget" @change=${this.loadExample}>
           <option value="">Examples…</option>
-          ${EXAMPLES.map((e, i) => html`<option value=${i}>${e.document.title}</option>`)}
+          ${EXAMPLES.map((e, i) => html`<option value=${i} data-file=${e.fileName}>${e.document.title}</option>`)}
         </select>
         <button ?disabled=${!this.store.canUndo} title=${`Undo ${this.store.undoLabel ?? ''} (Ctrl+Z)`} @click=${() => this.store.undo()}>Undo</button>
         <button ?disabled=${!this.store.canRedo} title=${`Redo ${this.store.redoLabel ?? ''} (Ctrl+Shift+Z)`} @click=${() => this.store.redo()}>Redo</button>
@@ -94,11 +97,18 @@ export class SlApp extends LitElement {
         ${this.autosave.failure}. A reload would lose them; keep a copy of the current budget:
         <button @click=${this.save}>Download the current budget</button></div>` : nothing}
       ${this.message ? html`<div class="banner" role="alert">${this.message}<button @click=${() => (this.message = undefined)}>Dismiss</button></div>` : nothing}
-      <main>
+      <main>${this.is3d ? html`
+        <sl-inertial-workbench .store=${this.store} .view=${c.view}></sl-inertial-workbench>
+        <sl-inertial-findings .view=${c.view} .stale=${c.stale}></sl-inertial-findings>` : html`
         <sl-workbench .store=${this.store} .view=${c.view}></sl-workbench>
-        <sl-findings .view=${c.view} .stale=${c.stale} .status=${c.status} .document=${this.store.document}></sl-findings>
+        <sl-findings .view=${c.view} .stale=${c.stale} .status=${c.status} .document=${this.store.document}></sl-findings>`}
       </main>
     `;
+  }
+
+  /** True while the open document is a 3-D budget (its own editors and findings). */
+  private get is3d(): boolean {
+    return isInertialDocument(this.store.document as AnyBudgetDocument);
   }
 
   private statusText(): string {

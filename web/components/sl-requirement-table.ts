@@ -4,7 +4,7 @@ import type { BudgetDocument, RequirementEntry } from '../../src';
 import type { ConfidenceLevel, QuantityName } from '../../src';
 import { limitDimension } from '../../src';
 import type { ViewResult } from '../../src';
-import { DIMENSIONS, unitDimension } from '../../src';
+import { DIMENSIONS, unitDimension, type DimensionName } from '../../src';
 import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
 import { idProblem, uniqueId } from '../../src';
@@ -15,6 +15,15 @@ import './sl-quantity';
 
 const QUANTITIES: QuantityName[] = ['horizontal', 'north', 'east', 'along-track', 'cross-track', 'heading', 'speed'];
 const LEVELS: ConfidenceLevel[] = ['1sigma', '2sigma', '95%', '50%'];
+/** What a requirement may constrain in one error model: its quantities and the dimension of each one's limit. */
+export interface RequirementModel {
+  quantities: readonly string[];
+  dimensionOf(quantity: string): DimensionName;
+}
+
+/** The planar model's (the default). */
+const PLANAR: RequirementModel = { quantities: QUANTITIES, dimensionOf: (q) => limitDimension(q as QuantityName) };
+
 const HORIZONTAL_LEVEL: Record<ConfidenceLevel, string> = { '1sigma': 'DRMS', '2sigma': '2DRMS', '95%': 'R95', '50%': 'CEP' };
 
 /**
@@ -40,6 +49,12 @@ export class SlRequirementTable extends LitElement {
   @property({ attribute: false }) doc?: BudgetDocument;
   /** The latest view: cell errors and blocking problems. */
   @property({ attribute: false }) view?: ViewResult;
+  /** Quantities and limit dimensions of the document's model; planar unless given (a 3-D budget passes its own). */
+  @property({ attribute: false }) model?: RequirementModel;
+
+  private get requirementModel(): RequirementModel {
+    return this.model ?? PLANAR;
+  }
 
   override render() {
     const list = this.store.document.requirements ?? [];
@@ -63,10 +78,10 @@ export class SlRequirementTable extends LitElement {
     return html`<tbody>
       <tr class="first">
         <td><sl-cell text .content=${r.id} label=${`Id of requirement ${r.id}`} @sl-commit=${(e: CustomEvent<CellCommitDetail>) => this.rename(k, e)}></sl-cell></td>
-        <td>${select('quantity', QUANTITIES, (o) => o)}</td>
+        <td>${select('quantity', [...this.requirementModel.quantities], (o) => o)}</td>
         <td>${select('level', LEVELS, (o) => (r.quantity === 'horizontal' ? `${o} (${HORIZONTAL_LEVEL[o as ConfidenceLevel]})` : o))}</td>
         <td><sl-quantity .store=${this.store} .doc=${this.doc} .view=${this.view} path=${`${path}.limit`} label=${`${r.id} limit`}
-          .dimensions=${[limitDimension(r.quantity)]}></sl-quantity></td>
+          .dimensions=${[this.requirementModel.dimensionOf(r.quantity)]}></sl-quantity></td>
         <td><button class="icon" aria-label=${`Remove requirement ${r.id}`} title="Remove" @click=${() => this.removeRequirement(k)}>✕</button></td>
       </tr>
       <tr class="window"><td></td><td colspan="4">${this.renderWindow(r, k)}</td></tr>
@@ -98,7 +113,7 @@ export class SlRequirementTable extends LitElement {
       const r = d.requirements![k];
       if (what === 'level') return void (r.level = value as ConfidenceLevel);
       r.quantity = value as QuantityName;
-      const dim = limitDimension(r.quantity);
+      const dim = this.requirementModel.dimensionOf(r.quantity);
       if (unitDimension(r.limit.unit) !== dim) {
         message = `The limit of ${r.id} is now ${DIMENSIONS[dim].label}: its unit was set to ${DIMENSIONS[dim].picker[0]} and its number kept; check it.`;
         r.limit.unit = DIMENSIONS[dim].picker[0];

@@ -10,6 +10,7 @@ import type { ConfidenceLevel } from '../../src';
 import './sl-checkpoint-list';
 import './sl-quantity';
 import './sl-requirement-table';
+import type { RequirementModel } from './sl-requirement-table';
 
 /**
  * The "Requirements" tab: the limits the budget must meet, the checkpoints
@@ -29,12 +30,14 @@ export class SlRequirementsEditor extends LitElement {
   @property({ attribute: false }) doc?: BudgetDocument;
   /** The latest view: cell errors and blocking problems. */
   @property({ attribute: false }) view?: ViewResult;
+  /** The quantities a requirement may name and the dimension of each limit (a 3-D budget passes its own). */
+  @property({ attribute: false }) model?: RequirementModel;
 
   override render() {
     const stepProblem = blockedWithin(this.view, 'settings');
     return html`
       <h3>Requirements</h3>
-      <sl-requirement-table .store=${this.store} .doc=${this.doc} .view=${this.view}></sl-requirement-table>
+      <sl-requirement-table .store=${this.store} .doc=${this.doc} .view=${this.view} .model=${this.model}></sl-requirement-table>
       <h3>Checkpoints</h3>
       <sl-checkpoint-list .store=${this.store} .doc=${this.doc} .view=${this.view}></sl-checkpoint-list>
       <h3>Analysis</h3>

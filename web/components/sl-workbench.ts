@@ -61,7 +61,8 @@ export class SlWorkbench extends LitElement {
   @state() tab: WorkbenchTab = 'suite';
   @state() private note?: string;
   private subscribed?: DocumentStore;
-  private readonly storeChanged = () => this.requestUpdate();
+  // A 3-D document is edited by sl-inertial-workbench; this one is about to leave the page and must not render it.
+  private readonly storeChanged = () => ((this.store.document as { model?: string }).model === 'inertial' ? undefined : this.requestUpdate());
 
   override connectedCallback(): void {
     super.connectedCallback();

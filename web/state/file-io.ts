@@ -1,4 +1,4 @@
-import { MAX_TEXT_CHARS, parseBudgetDocument, serializeBudgetDocument, type BudgetDocument } from '../../src';
+import { MAX_TEXT_CHARS, parseAnyBudgetDocument, serializeBudgetDocument, type BudgetDocument } from '../../src';
 import { BudgetFileError } from '../../src';
 import { firstInvalidUtf8Byte, invalidUtf8Message } from '../../src';
 
@@ -16,7 +16,9 @@ export async function readBudgetFile(file: File): Promise<{ document: BudgetDocu
   const text = new TextDecoder('utf-8', { ignoreBOM: true }).decode(bytes);
   const bad = firstInvalidUtf8Byte(bytes, text);
   if (bad >= 0) throw new BudgetFileError(file.name, '', invalidUtf8Message(bytes, bad));
-  return parseBudgetDocument(text, file.name);
+  // Either model: a 3-D budget opens in the 3-D editors (the store holds it as it is).
+  const parsed = parseAnyBudgetDocument(text, file.name);
+  return { document: parsed.document as BudgetDocument, notes: parsed.notes };
 }
 
 /** Offers the document for download as the same JSON the command line reads. */

@@ -4,13 +4,13 @@
  * reaches the engine: the version shown is fully validated as a budget
  * file would be, the others in the history get a shape check.
  */
-import { parseBudgetDocument, type BudgetDocument } from '../../src';
+import { parseAnyBudgetDocument, type BudgetDocument } from '../../src';
 import { SigmaLedgerError } from '../../src';
 
 /** True when `doc` passes every check a budget file gets (schema, ids, names). Throws nothing. */
 export function isValidBudget(doc: unknown): doc is BudgetDocument {
   try {
-    parseBudgetDocument(JSON.stringify(doc), 'autosave');
+    parseAnyBudgetDocument(JSON.stringify(doc), 'autosave'); // either model: a 3-D budget is restored too
     return true;
   } catch (e) {
     if (e instanceof SigmaLedgerError || e instanceof TypeError) return false;
