@@ -3,6 +3,7 @@ import type { NominalTrajectory } from '../mission/nominal-trajectory';
 import {
   addDense, addSparse, josephUpdateInPlace, multiplySparseVector, propagateVectors, updateVectors,
 } from './covariance-kernels';
+import { BlockUpdate } from './block-update';
 import { checkCovariance, type CovarianceIssue } from './covariance-health';
 import type { StepDiscretisation } from './discretise-step';
 import { DiscretisationCache } from './discretisation-cache';
@@ -101,8 +102,12 @@ interface RunState {
   scratch: Float64Array;
   u: Float64Array;
   gain: Float64Array;
-  /** Per dense slot after the total: R owned by that slot's source for the current measurement. */
-  rOfSlot: Float64Array;
+  /** The boundary's scalars for the sources' block update (block-update.ts). */
+  block: BlockUpdate;
+  /** R owned by dense sources at this boundary: (slot, scalar index, variance), flat. */
+  ownedR: number[];
+  /** R of one slot per scalar of the boundary. */
+  rOf: Float64Array;
 }
 
 /**
@@ -143,7 +148,8 @@ export function runCovarianceProblem(problem: CovarianceProblem, options: RunOpt
   const plan = planSourceStorage(problem, contributions);
   const st: RunState = {
     n, plan, mats: new Float64Array(plan.denseCount * n * n), vecs: new Float64Array(Math.max(1, plan.vectors) * n),
-    scratch: new Float64Array(n * n), u: new Float64Array(n), gain: new Float64Array(n), rOfSlot: new Float64Array(plan.denseCount),
+    scratch: new Float64Array(n * n), u: new Float64Array(n), gain: new Float64Array(n),
+    block: new BlockUpdate(n), ownedR: [], rOf: new Float64Array(8),
   };
   initialiseStorage(problem, plan, st.mats, st.vecs, contributions);
   const recorded = problem.recordedPairs.map(() => new Float64Array((S + 1) * steps));
@@ -157,9 +163,15 @@ export function runCovarianceProblem(problem: CovarianceProblem, options: RunOpt
 
   for (let k = 0; k < runSteps; k++) {
     if (k > 0) for (const d of problem.discretisation.forStep(k)) propagateAll(st, d);
-    for (const m of problem.measurementsAt(k)) {
-      if (updateAll(st, m)) counts[m.sensorId] = (counts[m.sensorId] ?? 0) + 1;
-      else noteIssue(issues, { kind: 'singular-innovation', tS: problem.tS[k], detail: `${m.key}: innovation variance is not positive` });
+    const due = problem.measurementsAt(k);
+    if (due.length > 0) {
+      st.block.clear();
+      st.ownedR.length = 0;
+      for (const m of due) {
+        if (updateTotal(st, m)) counts[m.sensorId] = (counts[m.sensorId] ?? 0) + 1;
+        else noteIssue(issues, { kind: 'singular-innovation', tS: problem.tS[k], detail: `${m.key}: innovation variance is not positive` });
+      }
+      updateDenseSources(st);
     }
     const row = recordPlan.rowOfStep[k];
     if (row >= 0) {
@@ -193,26 +205,43 @@ function propagateAll(st: RunState, d: StepDiscretisation): void {
   propagateVectors(st.vecs, st.plan.vectors, d.phi, st.scratch);
 }
 
-/** One scalar update of the total and every source; false (and nothing changed) when the innovation variance is not positive. */
-function updateAll(st: RunState, m: ScheduledMeasurement): boolean {
+/**
+ * One scalar update of the total (sequential, docs/planar-model.md §6) and
+ * of the rank-one vectors; the dense sources wait for the boundary's block
+ * update. False (and nothing changed) when the innovation variance is not positive.
+ */
+function updateTotal(st: RunState, m: ScheduledMeasurement): boolean {
   const { n, mats, u, gain, plan } = st;
-  const nn = n * n;
   const hph = multiplySparseVector(mats, 0, n, m.hIdx, m.hVal, u);
   const innovation = hph + m.rTotal;
   if (!(innovation > 0) || !Number.isFinite(innovation)) return false;
   for (let i = 0; i < n; i++) gain[i] = u[i] / innovation;
   josephUpdateInPlace(mats, 0, n, gain, u, hph, m.rTotal);
-  st.rOfSlot.fill(0);
-  for (let p = 0; p < m.rSources.length; p++) {
-    const slot = plan.denseSlot[m.rSources[p]];
-    if (slot > 0) st.rOfSlot[slot] += m.rVariances[p];
-  }
-  for (let slot = 1; slot < plan.denseCount; slot++) {
-    const hxh = multiplySparseVector(mats, slot * nn, n, m.hIdx, m.hVal, u);
-    josephUpdateInPlace(mats, slot * nn, n, gain, u, hxh, st.rOfSlot[slot]);
+  if (plan.denseCount > 1) {
+    const a = st.block.q;
+    st.block.add(m.hIdx, m.hVal, gain);
+    for (let p = 0; p < m.rSources.length; p++) {
+      const slot = plan.denseSlot[m.rSources[p]];
+      if (slot > 0) st.ownedR.push(slot, a, m.rVariances[p]);
+    }
   }
   updateVectors(st.vecs, plan.vectors, n, m.hIdx, m.hVal, gain);
   return true;
+}
+
+/** The fixed-gain update of every dense source with all of the boundary's scalars as one block (block-update.ts). */
+function updateDenseSources(st: RunState): void {
+  const { block, plan, ownedR } = st;
+  const q = block.q;
+  if (q === 0 || plan.denseCount <= 1) return;
+  block.finish();
+  if (st.rOf.length < q) st.rOf = new Float64Array(2 * q);
+  const nn = st.n * st.n;
+  for (let slot = 1; slot < plan.denseCount; slot++) {
+    st.rOf.fill(0, 0, q);
+    for (let e = 0; e < ownedR.length; e += 3) if (ownedR[e] === slot) st.rOf[ownedR[e + 1]] += ownedR[e + 2];
+    block.apply(st.mats, slot * nn, st.rOf);
+  }
 }
 
 function record(
