@@ -10,7 +10,7 @@ import { DiscretisationCache } from './discretisation-cache';
 import { MeasurementSchedule, type ScheduledMeasurement } from './measurement-schedule';
 import { recordEveryStep, recordsEveryStep, type RecordPlan } from './record-plan';
 import {
-  initialiseStorage, planSourceStorage, sourceEntry, sourceMatrix, type SourceStorage, type StoredModel,
+  initialiseStorage, planSourceStorage, sourceMatrix, type SourceStorage, type StoredModel,
 } from './source-storage';
 
 /**
@@ -176,7 +176,10 @@ export function runCovarianceProblem(problem: CovarianceProblem, options: RunOpt
     const row = recordPlan.rowOfStep[k];
     if (row >= 0) {
       record(st, problem.recordedPairs, S, row, steps, recorded);
-      calibrationStates.forEach((i, c) => (calibrationSigma[c][row] = Math.sqrt(Math.max(0, st.mats[i * n + i]))));
+      for (let c = 0; c < calibrationStates.length; c++) {
+        const i = calibrationStates[c];
+        calibrationSigma[c][row] = Math.sqrt(Math.max(0, st.mats[i * n + i]));
+      }
     }
     if (!everyStep) record(st, problem.recordedPairs, 0, k, runSteps, totalRecorded);
     // The full check (an LDLᵀ) every tenth step and at the end: a problem is reported within a second of mission time.
@@ -197,11 +200,12 @@ function propagateAll(st: RunState, d: StepDiscretisation): void {
   const nn = st.n * st.n;
   d.propagate(st.mats, 0, d.phi.val, st.scratch);
   addDense(st.mats, 0, d.qdTotal);
-  st.plan.denseSources.forEach((s, j) => {
+  const { denseSources } = st.plan;
+  for (let j = 0; j < denseSources.length; j++) {
     const off = (j + 1) * nn;
     d.propagate(st.mats, off, d.phi.val, st.scratch);
-    addSparse(st.mats, off, d.qdBySource[s]);
-  });
+    addSparse(st.mats, off, d.qdBySource[denseSources[j]]);
+  }
   propagateVectors(st.vecs, st.plan.vectors, d.phi, st.scratch);
 }
 
@@ -255,7 +259,14 @@ function record(
       const o = slot * n * n;
       for (let p = 0; p < pairs.length; p++) out[p][at] = mats[o + pairs[p][0] * n + pairs[p][1]];
     } else {
-      for (let p = 0; p < pairs.length; p++) out[p][at] = sourceEntry(plan, mats, vecs, n, m - 1, pairs[p][0], pairs[p][1]);
+      // A rank-one source: Σ ψ_c[i] ψ_c[j] over its vectors, in the order of sourceEntry.
+      const first = plan.firstVector[m - 1], end = first + plan.vectorCount[m - 1];
+      for (let p = 0; p < pairs.length; p++) {
+        const i = pairs[p][0], j = pairs[p][1];
+        let sum = 0;
+        for (let c = first; c < end; c++) sum += vecs[c * n + i] * vecs[c * n + j];
+        out[p][at] = sum;
+      }
     }
   }
 }
