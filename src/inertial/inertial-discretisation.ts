@@ -86,6 +86,6 @@ export function discretiseInertialStep(model: InertialModel, row: NominalRow, hS
 function nonZeroEntries(dense: Float64Array): SparseEntries {
   const index: number[] = [];
   const val: number[] = [];
-  dense.forEach((x, e) => { if (x !== 0) { index.push(e); val.push(x); } });
+  for (let e = 0; e < dense.length; e++) if (dense[e] !== 0) { index.push(e); val.push(dense[e]); }
   return { index: Int32Array.from(index), val: Float64Array.from(val) };
 }
