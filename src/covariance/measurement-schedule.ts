@@ -35,6 +35,12 @@ export class MeasurementSchedule {
   private readonly rByKey: Map<string, NoiseOwners>;
   private readonly h: Float64Array;
   private readonly due: ScheduledMeasurement[] = [];
+  /** cos and sin of the heading at boundary `trigK`: computed once per step, whatever the number of sensors. */
+  private trigK = -1;
+  private cosPsi = 1;
+  private sinPsi = 0;
+  /** The last h of each measurement key: an unchanged h (a straight segment) reuses its arrays instead of allocating. */
+  private readonly lastH = new Map<string, { hIdx: Int32Array; hVal: Float64Array }>();
 
   constructor(private readonly model: ErrorModel, private readonly traj: NominalTrajectory) {
     this.last = traj.tS.length - 1;
@@ -72,7 +78,12 @@ export class MeasurementSchedule {
     const n = h.length;
     const { along, cross } = this.model.core;
     const psi = traj.headingRad[k];
-    const c = Math.cos(psi), s = Math.sin(psi);
+    if (this.trigK !== k) {
+      this.trigK = k;
+      this.cosPsi = Math.cos(psi);
+      this.sinPsi = Math.sin(psi);
+    }
+    const c = this.cosPsi, s = this.sinPsi;
     for (const row of stream.rowsAt({ northM: traj.northM[k], eastM: traj.eastM[k], headingRad: psi })) {
       h.fill(0);
       // dN = c pA - s pC, dE = s pA + c pC (path frame to north/east).
@@ -82,10 +93,28 @@ export class MeasurementSchedule {
       const r = this.rByKey.get(row.noiseKey) ?? NO_NOISE;
       let count = 0;
       for (let i = 0; i < n; i++) if (h[i] !== 0) count++;
-      const hIdx = new Int32Array(count), hVal = new Float64Array(count);
-      for (let i = 0, e = 0; i < n; i++) if (h[i] !== 0) { hIdx[e] = i; hVal[e++] = h[i]; }
-      this.due.push({ key: row.key, sensorId: stream.sensorId, tS, hIdx, hVal, ...r });
+      const { hIdx, hVal } = this.sparseH(row.key, count);
+      this.due.push({
+        key: row.key, sensorId: stream.sensorId, tS, hIdx, hVal,
+        rSources: r.rSources, rVariances: r.rVariances, rTotal: r.rTotal,
+      });
     }
+  }
+
+  /** The non-zeros of this.h (`count` of them), as the arrays last given for `key` when they are equal. */
+  private sparseH(key: string, count: number): { hIdx: Int32Array; hVal: Float64Array } {
+    const h = this.h;
+    const last = this.lastH.get(key);
+    if (last && last.hIdx.length === count) {
+      let same = true;
+      for (let e = 0; e < count && same; e++) same = h[last.hIdx[e]] === last.hVal[e];
+      if (same) return last;
+    }
+    const hIdx = new Int32Array(count), hVal = new Float64Array(count);
+    for (let i = 0, e = 0; i < h.length; i++) if (h[i] !== 0) { hIdx[e] = i; hVal[e++] = h[i]; }
+    const made = { hIdx, hVal };
+    this.lastH.set(key, made);
+    return made;
   }
 }
 

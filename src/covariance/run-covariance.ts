@@ -3,13 +3,14 @@ import type { NominalTrajectory } from '../mission/nominal-trajectory';
 import {
   addDense, addSparse, josephUpdateInPlace, multiplySparseVector, propagateVectors, updateVectors,
 } from './covariance-kernels';
+import { BlockUpdate } from './block-update';
 import { checkCovariance, type CovarianceIssue } from './covariance-health';
 import type { StepDiscretisation } from './discretise-step';
 import { DiscretisationCache } from './discretisation-cache';
 import { MeasurementSchedule, type ScheduledMeasurement } from './measurement-schedule';
 import { recordEveryStep, recordsEveryStep, type RecordPlan } from './record-plan';
 import {
-  initialiseStorage, planSourceStorage, sourceEntry, sourceMatrix, type SourceStorage, type StoredModel,
+  initialiseStorage, planSourceStorage, sourceMatrix, type SourceStorage, type StoredModel,
 } from './source-storage';
 
 /**
@@ -101,8 +102,12 @@ interface RunState {
   scratch: Float64Array;
   u: Float64Array;
   gain: Float64Array;
-  /** Per dense slot after the total: R owned by that slot's source for the current measurement. */
-  rOfSlot: Float64Array;
+  /** The boundary's scalars for the sources' block update (block-update.ts). */
+  block: BlockUpdate;
+  /** R owned by dense sources at this boundary: (slot, scalar index, variance), flat. */
+  ownedR: number[];
+  /** R of one slot per scalar of the boundary. */
+  rOf: Float64Array;
 }
 
 /**
@@ -143,7 +148,8 @@ export function runCovarianceProblem(problem: CovarianceProblem, options: RunOpt
   const plan = planSourceStorage(problem, contributions);
   const st: RunState = {
     n, plan, mats: new Float64Array(plan.denseCount * n * n), vecs: new Float64Array(Math.max(1, plan.vectors) * n),
-    scratch: new Float64Array(n * n), u: new Float64Array(n), gain: new Float64Array(n), rOfSlot: new Float64Array(plan.denseCount),
+    scratch: new Float64Array(n * n), u: new Float64Array(n), gain: new Float64Array(n),
+    block: new BlockUpdate(n), ownedR: [], rOf: new Float64Array(8),
   };
   initialiseStorage(problem, plan, st.mats, st.vecs, contributions);
   const recorded = problem.recordedPairs.map(() => new Float64Array((S + 1) * steps));
@@ -157,14 +163,23 @@ export function runCovarianceProblem(problem: CovarianceProblem, options: RunOpt
 
   for (let k = 0; k < runSteps; k++) {
     if (k > 0) for (const d of problem.discretisation.forStep(k)) propagateAll(st, d);
-    for (const m of problem.measurementsAt(k)) {
-      if (updateAll(st, m)) counts[m.sensorId] = (counts[m.sensorId] ?? 0) + 1;
-      else noteIssue(issues, { kind: 'singular-innovation', tS: problem.tS[k], detail: `${m.key}: innovation variance is not positive` });
+    const due = problem.measurementsAt(k);
+    if (due.length > 0) {
+      st.block.clear();
+      st.ownedR.length = 0;
+      for (const m of due) {
+        if (updateTotal(st, m)) counts[m.sensorId] = (counts[m.sensorId] ?? 0) + 1;
+        else noteIssue(issues, { kind: 'singular-innovation', tS: problem.tS[k], detail: `${m.key}: innovation variance is not positive` });
+      }
+      updateDenseSources(st);
     }
     const row = recordPlan.rowOfStep[k];
     if (row >= 0) {
       record(st, problem.recordedPairs, S, row, steps, recorded);
-      calibrationStates.forEach((i, c) => (calibrationSigma[c][row] = Math.sqrt(Math.max(0, st.mats[i * n + i]))));
+      for (let c = 0; c < calibrationStates.length; c++) {
+        const i = calibrationStates[c];
+        calibrationSigma[c][row] = Math.sqrt(Math.max(0, st.mats[i * n + i]));
+      }
     }
     if (!everyStep) record(st, problem.recordedPairs, 0, k, runSteps, totalRecorded);
     // The full check (an LDLᵀ) every tenth step and at the end: a problem is reported within a second of mission time.
@@ -185,34 +200,52 @@ function propagateAll(st: RunState, d: StepDiscretisation): void {
   const nn = st.n * st.n;
   d.propagate(st.mats, 0, d.phi.val, st.scratch);
   addDense(st.mats, 0, d.qdTotal);
-  st.plan.denseSources.forEach((s, j) => {
+  const { denseSources } = st.plan;
+  for (let j = 0; j < denseSources.length; j++) {
     const off = (j + 1) * nn;
     d.propagate(st.mats, off, d.phi.val, st.scratch);
-    addSparse(st.mats, off, d.qdBySource[s]);
-  });
+    addSparse(st.mats, off, d.qdBySource[denseSources[j]]);
+  }
   propagateVectors(st.vecs, st.plan.vectors, d.phi, st.scratch);
 }
 
-/** One scalar update of the total and every source; false (and nothing changed) when the innovation variance is not positive. */
-function updateAll(st: RunState, m: ScheduledMeasurement): boolean {
+/**
+ * One scalar update of the total (sequential, docs/planar-model.md §6) and
+ * of the rank-one vectors; the dense sources wait for the boundary's block
+ * update. False (and nothing changed) when the innovation variance is not positive.
+ */
+function updateTotal(st: RunState, m: ScheduledMeasurement): boolean {
   const { n, mats, u, gain, plan } = st;
-  const nn = n * n;
   const hph = multiplySparseVector(mats, 0, n, m.hIdx, m.hVal, u);
   const innovation = hph + m.rTotal;
   if (!(innovation > 0) || !Number.isFinite(innovation)) return false;
   for (let i = 0; i < n; i++) gain[i] = u[i] / innovation;
   josephUpdateInPlace(mats, 0, n, gain, u, hph, m.rTotal);
-  st.rOfSlot.fill(0);
-  for (let p = 0; p < m.rSources.length; p++) {
-    const slot = plan.denseSlot[m.rSources[p]];
-    if (slot > 0) st.rOfSlot[slot] += m.rVariances[p];
-  }
-  for (let slot = 1; slot < plan.denseCount; slot++) {
-    const hxh = multiplySparseVector(mats, slot * nn, n, m.hIdx, m.hVal, u);
-    josephUpdateInPlace(mats, slot * nn, n, gain, u, hxh, st.rOfSlot[slot]);
+  if (plan.denseCount > 1) {
+    const a = st.block.q;
+    st.block.add(m.hIdx, m.hVal, gain);
+    for (let p = 0; p < m.rSources.length; p++) {
+      const slot = plan.denseSlot[m.rSources[p]];
+      if (slot > 0) st.ownedR.push(slot, a, m.rVariances[p]);
+    }
   }
   updateVectors(st.vecs, plan.vectors, n, m.hIdx, m.hVal, gain);
   return true;
+}
+
+/** The fixed-gain update of every dense source with all of the boundary's scalars as one block (block-update.ts). */
+function updateDenseSources(st: RunState): void {
+  const { block, plan, ownedR } = st;
+  const q = block.q;
+  if (q === 0 || plan.denseCount <= 1) return;
+  block.finish();
+  if (st.rOf.length < q) st.rOf = new Float64Array(2 * q);
+  const nn = st.n * st.n;
+  for (let slot = 1; slot < plan.denseCount; slot++) {
+    st.rOf.fill(0, 0, q);
+    for (let e = 0; e < ownedR.length; e += 3) if (ownedR[e] === slot) st.rOf[ownedR[e + 1]] += ownedR[e + 2];
+    block.apply(st.mats, slot * nn, st.rOf);
+  }
 }
 
 function record(
@@ -226,7 +259,14 @@ function record(
       const o = slot * n * n;
       for (let p = 0; p < pairs.length; p++) out[p][at] = mats[o + pairs[p][0] * n + pairs[p][1]];
     } else {
-      for (let p = 0; p < pairs.length; p++) out[p][at] = sourceEntry(plan, mats, vecs, n, m - 1, pairs[p][0], pairs[p][1]);
+      // A rank-one source: Σ ψ_c[i] ψ_c[j] over its vectors, in the order of sourceEntry.
+      const first = plan.firstVector[m - 1], end = first + plan.vectorCount[m - 1];
+      for (let p = 0; p < pairs.length; p++) {
+        const i = pairs[p][0], j = pairs[p][1];
+        let sum = 0;
+        for (let c = first; c < end; c++) sum += vecs[c * n + i] * vecs[c * n + j];
+        out[p][at] = sum;
+      }
     }
   }
 }

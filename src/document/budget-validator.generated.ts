@@ -10,7 +10,7 @@ export default validate10;
 const schema11 = {
   $schema: 'http://json-schema.org/draft-07/schema#',
   $id: 'https://sigma-ledger.invalid/schemas/budget.schema.json',
-  title: 'Sigma Ledger budget document, format version 1',
+  title: 'Sigma Ledger budget document, format version 2',
   description:
     "A sensor error budget kept as a small JSON workbook: the mission, the sensors with one row per error source, named values, requirements and checkpoints. Every numeric cell holds a number or a formula text starting with '='; the unit is stored beside every value. Results are never stored: they are recomputed from these inputs. Key order in this schema is the order in which Sigma Ledger writes the file.",
   type: 'object',
@@ -26,7 +26,12 @@ const schema11 = {
     formatVersion: {
       description:
         'Version of the document format. Older versions are migrated on load; newer ones need a newer Sigma Ledger.',
-      const: 1,
+      const: 2,
+    },
+    model: {
+      description:
+        'Which error model the budget uses: planar (default; heading and horizontal position of a ground vehicle or boat) or inertial (3-D: an IMU with aiding sensors, position, velocity and attitude in three axes). Keys that belong to the other model are refused with their path.',
+      enum: ['planar', 'inertial'],
     },
     title: {
       description: "Short name of the budget, shown as the report's heading.",
@@ -163,6 +168,11 @@ const schema11 = {
           $ref: '#/definitions/cell',
         },
         unit: { description: 'The unit the value is written in.', $ref: '#/definitions/unit' },
+        vertical: {
+          description:
+            'Inertial budgets, initial position and velocity: the 1-sigma vertical (down) value; the value above is per horizontal axis. Formula name mission.initialPosition.vertical (or initialVelocity).',
+          $ref: '#/definitions/quantity',
+        },
         provenance: { description: 'Where the number came from.', $ref: '#/definitions/provenance' },
         assumed: { description: 'True when nobody measured the value.', $ref: '#/definitions/assumed' },
         note: { description: 'Free text for the reader.', $ref: '#/definitions/note' },
@@ -186,11 +196,34 @@ const schema11 = {
               description: 'Heading at the start, clockwise from north seen from above (an angle).',
               $ref: '#/definitions/quantity',
             },
+            latitude: {
+              description: 'Inertial budgets: latitude of the start (an angle, strictly between -90 and 90 deg).',
+              $ref: '#/definitions/quantity',
+            },
+            height: {
+              description: 'Inertial budgets: height of the start above the reference sphere (a length).',
+              $ref: '#/definitions/quantity',
+            },
           },
+        },
+        attitudeRule: {
+          description:
+            'Inertial budgets: how the attitude follows the path: level (pitch and roll zero: ground vehicles on flat ground, boats, multirotors), banked (fixed wing: pitch from the climb, roll from the turn) or ground (pitch from the slope, roll zero).',
+          enum: ['level', 'banked', 'ground'],
         },
         initialPosition: {
           description:
             '1-sigma start-position uncertainty per axis (north and east alike); the error source mission.initialPosition, and the formula name of the same.',
+          $ref: '#/definitions/initialPoseSource',
+        },
+        initialVelocity: {
+          description:
+            'Inertial budgets: 1-sigma start-velocity uncertainty per horizontal axis, with its vertical value; the error source mission.initialVelocity.',
+          $ref: '#/definitions/initialPoseSource',
+        },
+        initialTilt: {
+          description:
+            'Inertial budgets: 1-sigma start-tilt uncertainty about north and about east (an angle); the error source mission.initialTilt.',
           $ref: '#/definitions/initialPoseSource',
         },
         initialHeading: {
@@ -227,6 +260,11 @@ const schema11 = {
           description: 'Turn rate; positive turns clockwise seen from above (an angular rate).',
           $ref: '#/definitions/quantity',
         },
+        verticalSpeed: {
+          description:
+            'Inertial budgets: vertical speed over the leg, up positive (a speed); omitted means level flight.',
+          $ref: '#/definitions/quantity',
+        },
         note: { description: 'Free text about the leg.', $ref: '#/definitions/note' },
       },
     },
@@ -243,10 +281,35 @@ const schema11 = {
         },
         kind: {
           description: 'Which sensor model applies.',
-          enum: ['yaw-gyro', 'wheel-speed', 'gnss-position', 'compass', 'range-bearing'],
+          enum: [
+            'yaw-gyro',
+            'wheel-speed',
+            'gnss-position',
+            'compass',
+            'range-bearing',
+            'imu',
+            'gnss-velocity',
+            'barometer',
+            'heading-aid',
+            'zero-velocity',
+            'motion-constraint',
+            'odometer',
+          ],
         },
         note: { description: 'Free text: part, mounting, why it is in the suite.', $ref: '#/definitions/note' },
         rate: { description: 'Output or measurement rate (a frequency).', $ref: '#/definitions/quantity' },
+        leverArm: {
+          description:
+            "Inertial budgets, GNSS position only: the antenna's position from the IMU in the body frame (x forward, y right, z down), a known setting with no uncertainty.",
+          type: 'object',
+          additionalProperties: false,
+          required: ['x', 'y', 'z'],
+          properties: {
+            x: { description: 'Forward offset (a length).', $ref: '#/definitions/quantity' },
+            y: { description: 'Right offset (a length).', $ref: '#/definitions/quantity' },
+            z: { description: 'Down offset (a length).', $ref: '#/definitions/quantity' },
+          },
+        },
         observables: {
           description: 'Range-bearing sensors only: which observables it reports (default both).',
           enum: ['range', 'bearing', 'range-bearing'],
@@ -268,6 +331,13 @@ const schema11 = {
         },
         outages: {
           description: 'Aiding sensors only: spans of mission time in which the sensor gives nothing.',
+          type: 'array',
+          maxItems: 100,
+          items: { $ref: '#/definitions/outage' },
+        },
+        windows: {
+          description:
+            'Inertial budgets, zero-velocity sensors only: spans [start, end) of mission time in which the update is used; each must lie inside a stop of the path (speed and vertical speed zero). Omitted: used at every stop.',
           type: 'array',
           maxItems: 100,
           items: { $ref: '#/definitions/outage' },
@@ -327,12 +397,26 @@ const schema11 = {
             'multipath',
           ],
         },
+        instrument: {
+          description: 'IMU rows only: the instrument the row belongs to.',
+          enum: ['gyro', 'accelerometer'],
+        },
+        axis: {
+          description:
+            'IMU rows only: the body axis the row applies to; omitted means all three. A row naming an axis replaces the all-axes row of its instrument and kind on that axis.',
+          enum: ['x', 'y', 'z'],
+        },
         value: {
           description:
             "The magnitude cell (sigma, coefficient, density, LSB): a number or a formula starting with '='.",
           $ref: '#/definitions/cell',
         },
         unit: { description: 'The unit the magnitude is written in.', $ref: '#/definitions/unit' },
+        vertical: {
+          description:
+            'Inertial GNSS rows (white noise, multipath): the vertical 1-sigma; the value above is per horizontal axis. Omitted means the same as horizontal. Formula name sensorId.rowId.vertical.',
+          $ref: '#/definitions/quantity',
+        },
         correlationTime: {
           description:
             'Correlation time (bias instability, multipath as states); formula name sensorId.rowId.correlationTime.',
@@ -421,7 +505,27 @@ const schema11 = {
         id: { description: 'Requirement id, unique among requirements.', $ref: '#/definitions/id' },
         quantity: {
           description: 'What is constrained.',
-          enum: ['heading', 'speed', 'north', 'east', 'along-track', 'cross-track', 'horizontal'],
+          enum: [
+            'heading',
+            'speed',
+            'north',
+            'east',
+            'along-track',
+            'cross-track',
+            'horizontal',
+            'down',
+            'height',
+            'drms',
+            'mrse',
+            'along',
+            'cross',
+            'velocityNorth',
+            'velocityEast',
+            'velocityDown',
+            'roll',
+            'pitch',
+            'yaw',
+          ],
         },
         level: {
           description: 'Confidence level; for horizontal, 1sigma is DRMS, 2sigma is 2DRMS, 95% is R95 and 50% is CEP.',
@@ -1092,11 +1196,34 @@ const schema21 = {
           description: 'Heading at the start, clockwise from north seen from above (an angle).',
           $ref: '#/definitions/quantity',
         },
+        latitude: {
+          description: 'Inertial budgets: latitude of the start (an angle, strictly between -90 and 90 deg).',
+          $ref: '#/definitions/quantity',
+        },
+        height: {
+          description: 'Inertial budgets: height of the start above the reference sphere (a length).',
+          $ref: '#/definitions/quantity',
+        },
       },
+    },
+    attitudeRule: {
+      description:
+        'Inertial budgets: how the attitude follows the path: level (pitch and roll zero: ground vehicles on flat ground, boats, multirotors), banked (fixed wing: pitch from the climb, roll from the turn) or ground (pitch from the slope, roll zero).',
+      enum: ['level', 'banked', 'ground'],
     },
     initialPosition: {
       description:
         '1-sigma start-position uncertainty per axis (north and east alike); the error source mission.initialPosition, and the formula name of the same.',
+      $ref: '#/definitions/initialPoseSource',
+    },
+    initialVelocity: {
+      description:
+        'Inertial budgets: 1-sigma start-velocity uncertainty per horizontal axis, with its vertical value; the error source mission.initialVelocity.',
+      $ref: '#/definitions/initialPoseSource',
+    },
+    initialTilt: {
+      description:
+        'Inertial budgets: 1-sigma start-tilt uncertainty about north and about east (an angle); the error source mission.initialTilt.',
       $ref: '#/definitions/initialPoseSource',
     },
     initialHeading: {
@@ -1124,6 +1251,11 @@ const schema23 = {
       $ref: '#/definitions/cell',
     },
     unit: { description: 'The unit the value is written in.', $ref: '#/definitions/unit' },
+    vertical: {
+      description:
+        'Inertial budgets, initial position and velocity: the 1-sigma vertical (down) value; the value above is per horizontal axis. Formula name mission.initialPosition.vertical (or initialVelocity).',
+      $ref: '#/definitions/quantity',
+    },
     provenance: { description: 'Where the number came from.', $ref: '#/definitions/provenance' },
     assumed: { description: 'True when nobody measured the value.', $ref: '#/definitions/assumed' },
     note: { description: 'Free text for the reader.', $ref: '#/definitions/note' },
@@ -1135,7 +1267,7 @@ const schema26 = {
   maxLength: 1000,
 };
 const schema27 = { description: 'True when nobody measured the value or read it from a datasheet.', type: 'boolean' };
-function validate21(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
+function validate23(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
   let vErrors = null;
   let errors = 0;
   if (errors === 0) {
@@ -1147,7 +1279,7 @@ function validate21(data, { instancePath = '', parentData, parentDataProperty, r
         (data.provenance === undefined && (missing0 = 'provenance')) ||
         (data.assumed === undefined && (missing0 = 'assumed'))
       ) {
-        validate21.errors = [
+        validate23.errors = [
           {
             instancePath,
             schemaPath: '#/required',
@@ -1166,11 +1298,12 @@ function validate21(data, { instancePath = '', parentData, parentDataProperty, r
           if (!(
             key0 === 'value' ||
             key0 === 'unit' ||
+            key0 === 'vertical' ||
             key0 === 'provenance' ||
             key0 === 'assumed' ||
             key0 === 'note'
           )) {
-            validate21.errors = [
+            validate23.errors = [
               {
                 instancePath,
                 schemaPath: '#/additionalProperties',
@@ -1192,7 +1325,7 @@ function validate21(data, { instancePath = '', parentData, parentDataProperty, r
             const _errs2 = errors;
             const _errs3 = errors;
             if (!(typeof data0 == 'number' && isFinite(data0)) && typeof data0 !== 'string') {
-              validate21.errors = [
+              validate23.errors = [
                 {
                   instancePath: instancePath + '/value',
                   schemaPath: '#/definitions/cell/type',
@@ -1209,7 +1342,7 @@ function validate21(data, { instancePath = '', parentData, parentDataProperty, r
             if (errors === _errs3) {
               if (typeof data0 === 'string') {
                 if (func3(data0) > 1000) {
-                  validate21.errors = [
+                  validate23.errors = [
                     {
                       instancePath: instancePath + '/value',
                       schemaPath: '#/definitions/cell/maxLength',
@@ -1224,7 +1357,7 @@ function validate21(data, { instancePath = '', parentData, parentDataProperty, r
                   return false;
                 } else {
                   if (func3(data0) < 2) {
-                    validate21.errors = [
+                    validate23.errors = [
                       {
                         instancePath: instancePath + '/value',
                         schemaPath: '#/definitions/cell/minLength',
@@ -1239,7 +1372,7 @@ function validate21(data, { instancePath = '', parentData, parentDataProperty, r
                     return false;
                   } else {
                     if (!pattern0.test(data0)) {
-                      validate21.errors = [
+                      validate23.errors = [
                         {
                           instancePath: instancePath + '/value',
                           schemaPath: '#/definitions/cell/pattern',
@@ -1269,7 +1402,7 @@ function validate21(data, { instancePath = '', parentData, parentDataProperty, r
               if (errors === _errs6) {
                 if (typeof data1 === 'string') {
                   if (func3(data1) > 64) {
-                    validate21.errors = [
+                    validate23.errors = [
                       {
                         instancePath: instancePath + '/unit',
                         schemaPath: '#/definitions/unit/maxLength',
@@ -1284,7 +1417,7 @@ function validate21(data, { instancePath = '', parentData, parentDataProperty, r
                     return false;
                   } else {
                     if (func3(data1) < 1) {
-                      validate21.errors = [
+                      validate23.errors = [
                         {
                           instancePath: instancePath + '/unit',
                           schemaPath: '#/definitions/unit/minLength',
@@ -1300,7 +1433,7 @@ function validate21(data, { instancePath = '', parentData, parentDataProperty, r
                     }
                   }
                 } else {
-                  validate21.errors = [
+                  validate23.errors = [
                     {
                       instancePath: instancePath + '/unit',
                       schemaPath: '#/definitions/unit/type',
@@ -1320,111 +1453,130 @@ function validate21(data, { instancePath = '', parentData, parentDataProperty, r
               var valid0 = true;
             }
             if (valid0) {
-              if (data.provenance !== undefined) {
-                let data2 = data.provenance;
+              if (data.vertical !== undefined) {
                 const _errs8 = errors;
-                const _errs9 = errors;
-                if (errors === _errs9) {
-                  if (typeof data2 === 'string') {
-                    if (func3(data2) > 1000) {
-                      validate21.errors = [
-                        {
-                          instancePath: instancePath + '/provenance',
-                          schemaPath: '#/definitions/provenance/maxLength',
-                          keyword: 'maxLength',
-                          params: { limit: 1000 },
-                          message: 'must NOT have more than 1000 characters',
-                          schema: 1000,
-                          parentSchema: schema26,
-                          data: data2,
-                        },
-                      ];
-                      return false;
-                    }
-                  } else {
-                    validate21.errors = [
-                      {
-                        instancePath: instancePath + '/provenance',
-                        schemaPath: '#/definitions/provenance/type',
-                        keyword: 'type',
-                        params: { type: 'string' },
-                        message: 'must be string',
-                        schema: schema26.type,
-                        parentSchema: schema26,
-                        data: data2,
-                      },
-                    ];
-                    return false;
-                  }
+                if (
+                  !validate12(data.vertical, {
+                    instancePath: instancePath + '/vertical',
+                    parentData: data,
+                    parentDataProperty: 'vertical',
+                    rootData,
+                  })
+                ) {
+                  vErrors = vErrors === null ? validate12.errors : vErrors.concat(validate12.errors);
+                  errors = vErrors.length;
                 }
                 var valid0 = _errs8 === errors;
               } else {
                 var valid0 = true;
               }
               if (valid0) {
-                if (data.assumed !== undefined) {
-                  let data3 = data.assumed;
-                  const _errs11 = errors;
-                  if (typeof data3 !== 'boolean') {
-                    validate21.errors = [
-                      {
-                        instancePath: instancePath + '/assumed',
-                        schemaPath: '#/definitions/assumed/type',
-                        keyword: 'type',
-                        params: { type: 'boolean' },
-                        message: 'must be boolean',
-                        schema: schema27.type,
-                        parentSchema: schema27,
-                        data: data3,
-                      },
-                    ];
-                    return false;
-                  }
-                  var valid0 = _errs11 === errors;
-                } else {
-                  var valid0 = true;
-                }
-                if (valid0) {
-                  if (data.note !== undefined) {
-                    let data4 = data.note;
-                    const _errs14 = errors;
-                    const _errs15 = errors;
-                    if (errors === _errs15) {
-                      if (typeof data4 === 'string') {
-                        if (func3(data4) > 2000) {
-                          validate21.errors = [
-                            {
-                              instancePath: instancePath + '/note',
-                              schemaPath: '#/definitions/note/maxLength',
-                              keyword: 'maxLength',
-                              params: { limit: 2000 },
-                              message: 'must NOT have more than 2000 characters',
-                              schema: 2000,
-                              parentSchema: schema20,
-                              data: data4,
-                            },
-                          ];
-                          return false;
-                        }
-                      } else {
-                        validate21.errors = [
+                if (data.provenance !== undefined) {
+                  let data3 = data.provenance;
+                  const _errs9 = errors;
+                  const _errs10 = errors;
+                  if (errors === _errs10) {
+                    if (typeof data3 === 'string') {
+                      if (func3(data3) > 1000) {
+                        validate23.errors = [
                           {
-                            instancePath: instancePath + '/note',
-                            schemaPath: '#/definitions/note/type',
-                            keyword: 'type',
-                            params: { type: 'string' },
-                            message: 'must be string',
-                            schema: schema20.type,
-                            parentSchema: schema20,
-                            data: data4,
+                            instancePath: instancePath + '/provenance',
+                            schemaPath: '#/definitions/provenance/maxLength',
+                            keyword: 'maxLength',
+                            params: { limit: 1000 },
+                            message: 'must NOT have more than 1000 characters',
+                            schema: 1000,
+                            parentSchema: schema26,
+                            data: data3,
                           },
                         ];
                         return false;
                       }
+                    } else {
+                      validate23.errors = [
+                        {
+                          instancePath: instancePath + '/provenance',
+                          schemaPath: '#/definitions/provenance/type',
+                          keyword: 'type',
+                          params: { type: 'string' },
+                          message: 'must be string',
+                          schema: schema26.type,
+                          parentSchema: schema26,
+                          data: data3,
+                        },
+                      ];
+                      return false;
                     }
-                    var valid0 = _errs14 === errors;
+                  }
+                  var valid0 = _errs9 === errors;
+                } else {
+                  var valid0 = true;
+                }
+                if (valid0) {
+                  if (data.assumed !== undefined) {
+                    let data4 = data.assumed;
+                    const _errs12 = errors;
+                    if (typeof data4 !== 'boolean') {
+                      validate23.errors = [
+                        {
+                          instancePath: instancePath + '/assumed',
+                          schemaPath: '#/definitions/assumed/type',
+                          keyword: 'type',
+                          params: { type: 'boolean' },
+                          message: 'must be boolean',
+                          schema: schema27.type,
+                          parentSchema: schema27,
+                          data: data4,
+                        },
+                      ];
+                      return false;
+                    }
+                    var valid0 = _errs12 === errors;
                   } else {
                     var valid0 = true;
+                  }
+                  if (valid0) {
+                    if (data.note !== undefined) {
+                      let data5 = data.note;
+                      const _errs15 = errors;
+                      const _errs16 = errors;
+                      if (errors === _errs16) {
+                        if (typeof data5 === 'string') {
+                          if (func3(data5) > 2000) {
+                            validate23.errors = [
+                              {
+                                instancePath: instancePath + '/note',
+                                schemaPath: '#/definitions/note/maxLength',
+                                keyword: 'maxLength',
+                                params: { limit: 2000 },
+                                message: 'must NOT have more than 2000 characters',
+                                schema: 2000,
+                                parentSchema: schema20,
+                                data: data5,
+                              },
+                            ];
+                            return false;
+                          }
+                        } else {
+                          validate23.errors = [
+                            {
+                              instancePath: instancePath + '/note',
+                              schemaPath: '#/definitions/note/type',
+                              keyword: 'type',
+                              params: { type: 'string' },
+                              message: 'must be string',
+                              schema: schema20.type,
+                              parentSchema: schema20,
+                              data: data5,
+                            },
+                          ];
+                          return false;
+                        }
+                      }
+                      var valid0 = _errs15 === errors;
+                    } else {
+                      var valid0 = true;
+                    }
                   }
                 }
               }
@@ -1433,7 +1585,7 @@ function validate21(data, { instancePath = '', parentData, parentDataProperty, r
         }
       }
     } else {
-      validate21.errors = [
+      validate23.errors = [
         {
           instancePath,
           schemaPath: '#/type',
@@ -1448,7 +1600,7 @@ function validate21(data, { instancePath = '', parentData, parentDataProperty, r
       return false;
     }
   }
-  validate21.errors = vErrors;
+  validate23.errors = vErrors;
   return errors === 0;
 }
 const schema29 = {
@@ -1468,6 +1620,10 @@ const schema29 = {
       description: 'Turn rate; positive turns clockwise seen from above (an angular rate).',
       $ref: '#/definitions/quantity',
     },
+    verticalSpeed: {
+      description: 'Inertial budgets: vertical speed over the leg, up positive (a speed); omitted means level flight.',
+      $ref: '#/definitions/quantity',
+    },
     note: { description: 'Free text about the leg.', $ref: '#/definitions/note' },
   },
 };
@@ -1477,7 +1633,7 @@ const schema30 = {
   pattern: '^[A-Za-z][A-Za-z0-9_]{0,63}$',
 };
 const pattern4 = new RegExp('^[A-Za-z][A-Za-z0-9_]{0,63}$', 'u');
-function validate24(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
+function validate29(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
   let vErrors = null;
   let errors = 0;
   if (errors === 0) {
@@ -1488,7 +1644,7 @@ function validate24(data, { instancePath = '', parentData, parentDataProperty, r
         (data.speed === undefined && (missing0 = 'speed')) ||
         (data.turnRate === undefined && (missing0 = 'turnRate'))
       ) {
-        validate24.errors = [
+        validate29.errors = [
           {
             instancePath,
             schemaPath: '#/required',
@@ -1510,9 +1666,10 @@ function validate24(data, { instancePath = '', parentData, parentDataProperty, r
             key0 === 'speed' ||
             key0 === 'speedEnd' ||
             key0 === 'turnRate' ||
+            key0 === 'verticalSpeed' ||
             key0 === 'note'
           )) {
-            validate24.errors = [
+            validate29.errors = [
               {
                 instancePath,
                 schemaPath: '#/additionalProperties',
@@ -1536,7 +1693,7 @@ function validate24(data, { instancePath = '', parentData, parentDataProperty, r
             if (errors === _errs3) {
               if (typeof data0 === 'string') {
                 if (!pattern4.test(data0)) {
-                  validate24.errors = [
+                  validate29.errors = [
                     {
                       instancePath: instancePath + '/id',
                       schemaPath: '#/definitions/id/pattern',
@@ -1551,7 +1708,7 @@ function validate24(data, { instancePath = '', parentData, parentDataProperty, r
                   return false;
                 }
               } else {
-                validate24.errors = [
+                validate29.errors = [
                   {
                     instancePath: instancePath + '/id',
                     schemaPath: '#/definitions/id/type',
@@ -1643,46 +1800,65 @@ function validate24(data, { instancePath = '', parentData, parentDataProperty, r
                     var valid0 = true;
                   }
                   if (valid0) {
-                    if (data.note !== undefined) {
-                      let data5 = data.note;
+                    if (data.verticalSpeed !== undefined) {
                       const _errs9 = errors;
-                      const _errs10 = errors;
-                      if (errors === _errs10) {
-                        if (typeof data5 === 'string') {
-                          if (func3(data5) > 2000) {
-                            validate24.errors = [
-                              {
-                                instancePath: instancePath + '/note',
-                                schemaPath: '#/definitions/note/maxLength',
-                                keyword: 'maxLength',
-                                params: { limit: 2000 },
-                                message: 'must NOT have more than 2000 characters',
-                                schema: 2000,
-                                parentSchema: schema20,
-                                data: data5,
-                              },
-                            ];
-                            return false;
-                          }
-                        } else {
-                          validate24.errors = [
-                            {
-                              instancePath: instancePath + '/note',
-                              schemaPath: '#/definitions/note/type',
-                              keyword: 'type',
-                              params: { type: 'string' },
-                              message: 'must be string',
-                              schema: schema20.type,
-                              parentSchema: schema20,
-                              data: data5,
-                            },
-                          ];
-                          return false;
-                        }
+                      if (
+                        !validate12(data.verticalSpeed, {
+                          instancePath: instancePath + '/verticalSpeed',
+                          parentData: data,
+                          parentDataProperty: 'verticalSpeed',
+                          rootData,
+                        })
+                      ) {
+                        vErrors = vErrors === null ? validate12.errors : vErrors.concat(validate12.errors);
+                        errors = vErrors.length;
                       }
                       var valid0 = _errs9 === errors;
                     } else {
                       var valid0 = true;
+                    }
+                    if (valid0) {
+                      if (data.note !== undefined) {
+                        let data6 = data.note;
+                        const _errs10 = errors;
+                        const _errs11 = errors;
+                        if (errors === _errs11) {
+                          if (typeof data6 === 'string') {
+                            if (func3(data6) > 2000) {
+                              validate29.errors = [
+                                {
+                                  instancePath: instancePath + '/note',
+                                  schemaPath: '#/definitions/note/maxLength',
+                                  keyword: 'maxLength',
+                                  params: { limit: 2000 },
+                                  message: 'must NOT have more than 2000 characters',
+                                  schema: 2000,
+                                  parentSchema: schema20,
+                                  data: data6,
+                                },
+                              ];
+                              return false;
+                            }
+                          } else {
+                            validate29.errors = [
+                              {
+                                instancePath: instancePath + '/note',
+                                schemaPath: '#/definitions/note/type',
+                                keyword: 'type',
+                                params: { type: 'string' },
+                                message: 'must be string',
+                                schema: schema20.type,
+                                parentSchema: schema20,
+                                data: data6,
+                              },
+                            ];
+                            return false;
+                          }
+                        }
+                        var valid0 = _errs10 === errors;
+                      } else {
+                        var valid0 = true;
+                      }
                     }
                   }
                 }
@@ -1692,7 +1868,7 @@ function validate24(data, { instancePath = '', parentData, parentDataProperty, r
         }
       }
     } else {
-      validate24.errors = [
+      validate29.errors = [
         {
           instancePath,
           schemaPath: '#/type',
@@ -1707,7 +1883,7 @@ function validate24(data, { instancePath = '', parentData, parentDataProperty, r
       return false;
     }
   }
-  validate24.errors = vErrors;
+  validate29.errors = vErrors;
   return errors === 0;
 }
 function validate17(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
@@ -1741,7 +1917,10 @@ function validate17(data, { instancePath = '', parentData, parentDataProperty, r
           if (!(
             key0 === 'note' ||
             key0 === 'start' ||
+            key0 === 'attitudeRule' ||
             key0 === 'initialPosition' ||
+            key0 === 'initialVelocity' ||
+            key0 === 'initialTilt' ||
             key0 === 'initialHeading' ||
             key0 === 'segments'
           )) {
@@ -1831,7 +2010,13 @@ function validate17(data, { instancePath = '', parentData, parentDataProperty, r
                   } else {
                     const _errs7 = errors;
                     for (const key1 in data1) {
-                      if (!(key1 === 'north' || key1 === 'east' || key1 === 'heading')) {
+                      if (!(
+                        key1 === 'north' ||
+                        key1 === 'east' ||
+                        key1 === 'heading' ||
+                        key1 === 'latitude' ||
+                        key1 === 'height'
+                      )) {
                         validate17.errors = [
                           {
                             instancePath: instancePath + '/start',
@@ -1902,6 +2087,44 @@ function validate17(data, { instancePath = '', parentData, parentDataProperty, r
                           } else {
                             var valid2 = true;
                           }
+                          if (valid2) {
+                            if (data1.latitude !== undefined) {
+                              const _errs11 = errors;
+                              if (
+                                !validate12(data1.latitude, {
+                                  instancePath: instancePath + '/start/latitude',
+                                  parentData: data1,
+                                  parentDataProperty: 'latitude',
+                                  rootData,
+                                })
+                              ) {
+                                vErrors = vErrors === null ? validate12.errors : vErrors.concat(validate12.errors);
+                                errors = vErrors.length;
+                              }
+                              var valid2 = _errs11 === errors;
+                            } else {
+                              var valid2 = true;
+                            }
+                            if (valid2) {
+                              if (data1.height !== undefined) {
+                                const _errs12 = errors;
+                                if (
+                                  !validate12(data1.height, {
+                                    instancePath: instancePath + '/start/height',
+                                    parentData: data1,
+                                    parentDataProperty: 'height',
+                                    rootData,
+                                  })
+                                ) {
+                                  vErrors = vErrors === null ? validate12.errors : vErrors.concat(validate12.errors);
+                                  errors = vErrors.length;
+                                }
+                                var valid2 = _errs12 === errors;
+                              } else {
+                                var valid2 = true;
+                              }
+                            }
+                          }
                         }
                       }
                     }
@@ -1927,118 +2150,181 @@ function validate17(data, { instancePath = '', parentData, parentDataProperty, r
               var valid0 = true;
             }
             if (valid0) {
-              if (data.initialPosition !== undefined) {
-                const _errs11 = errors;
-                if (
-                  !validate21(data.initialPosition, {
-                    instancePath: instancePath + '/initialPosition',
-                    parentData: data,
-                    parentDataProperty: 'initialPosition',
-                    rootData,
-                  })
-                ) {
-                  vErrors = vErrors === null ? validate21.errors : vErrors.concat(validate21.errors);
-                  errors = vErrors.length;
+              if (data.attitudeRule !== undefined) {
+                let data7 = data.attitudeRule;
+                const _errs13 = errors;
+                if (!(data7 === 'level' || data7 === 'banked' || data7 === 'ground')) {
+                  validate17.errors = [
+                    {
+                      instancePath: instancePath + '/attitudeRule',
+                      schemaPath: '#/properties/attitudeRule/enum',
+                      keyword: 'enum',
+                      params: { allowedValues: schema21.properties.attitudeRule.enum },
+                      message: 'must be equal to one of the allowed values',
+                      schema: schema21.properties.attitudeRule.enum,
+                      parentSchema: schema21.properties.attitudeRule,
+                      data: data7,
+                    },
+                  ];
+                  return false;
                 }
-                var valid0 = _errs11 === errors;
+                var valid0 = _errs13 === errors;
               } else {
                 var valid0 = true;
               }
               if (valid0) {
-                if (data.initialHeading !== undefined) {
-                  const _errs12 = errors;
+                if (data.initialPosition !== undefined) {
+                  const _errs14 = errors;
                   if (
-                    !validate21(data.initialHeading, {
-                      instancePath: instancePath + '/initialHeading',
+                    !validate23(data.initialPosition, {
+                      instancePath: instancePath + '/initialPosition',
                       parentData: data,
-                      parentDataProperty: 'initialHeading',
+                      parentDataProperty: 'initialPosition',
                       rootData,
                     })
                   ) {
-                    vErrors = vErrors === null ? validate21.errors : vErrors.concat(validate21.errors);
+                    vErrors = vErrors === null ? validate23.errors : vErrors.concat(validate23.errors);
                     errors = vErrors.length;
                   }
-                  var valid0 = _errs12 === errors;
+                  var valid0 = _errs14 === errors;
                 } else {
                   var valid0 = true;
                 }
                 if (valid0) {
-                  if (data.segments !== undefined) {
-                    let data7 = data.segments;
-                    const _errs13 = errors;
-                    if (errors === _errs13) {
-                      if (Array.isArray(data7)) {
-                        if (data7.length > 500) {
-                          validate17.errors = [
-                            {
-                              instancePath: instancePath + '/segments',
-                              schemaPath: '#/properties/segments/maxItems',
-                              keyword: 'maxItems',
-                              params: { limit: 500 },
-                              message: 'must NOT have more than 500 items',
-                              schema: 500,
-                              parentSchema: schema21.properties.segments,
-                              data: data7,
-                            },
-                          ];
-                          return false;
-                        } else {
-                          if (data7.length < 1) {
-                            validate17.errors = [
-                              {
-                                instancePath: instancePath + '/segments',
-                                schemaPath: '#/properties/segments/minItems',
-                                keyword: 'minItems',
-                                params: { limit: 1 },
-                                message: 'must NOT have fewer than 1 items',
-                                schema: 1,
-                                parentSchema: schema21.properties.segments,
-                                data: data7,
-                              },
-                            ];
-                            return false;
-                          } else {
-                            var valid3 = true;
-                            const len0 = data7.length;
-                            for (let i0 = 0; i0 < len0; i0++) {
-                              const _errs15 = errors;
-                              if (
-                                !validate24(data7[i0], {
-                                  instancePath: instancePath + '/segments/' + i0,
-                                  parentData: data7,
-                                  parentDataProperty: i0,
-                                  rootData,
-                                })
-                              ) {
-                                vErrors = vErrors === null ? validate24.errors : vErrors.concat(validate24.errors);
-                                errors = vErrors.length;
-                              }
-                              var valid3 = _errs15 === errors;
-                              if (!valid3) {
-                                break;
-                              }
-                            }
-                          }
-                        }
-                      } else {
-                        validate17.errors = [
-                          {
-                            instancePath: instancePath + '/segments',
-                            schemaPath: '#/properties/segments/type',
-                            keyword: 'type',
-                            params: { type: 'array' },
-                            message: 'must be array',
-                            schema: schema21.properties.segments.type,
-                            parentSchema: schema21.properties.segments,
-                            data: data7,
-                          },
-                        ];
-                        return false;
-                      }
+                  if (data.initialVelocity !== undefined) {
+                    const _errs15 = errors;
+                    if (
+                      !validate23(data.initialVelocity, {
+                        instancePath: instancePath + '/initialVelocity',
+                        parentData: data,
+                        parentDataProperty: 'initialVelocity',
+                        rootData,
+                      })
+                    ) {
+                      vErrors = vErrors === null ? validate23.errors : vErrors.concat(validate23.errors);
+                      errors = vErrors.length;
                     }
-                    var valid0 = _errs13 === errors;
+                    var valid0 = _errs15 === errors;
                   } else {
                     var valid0 = true;
+                  }
+                  if (valid0) {
+                    if (data.initialTilt !== undefined) {
+                      const _errs16 = errors;
+                      if (
+                        !validate23(data.initialTilt, {
+                          instancePath: instancePath + '/initialTilt',
+                          parentData: data,
+                          parentDataProperty: 'initialTilt',
+                          rootData,
+                        })
+                      ) {
+                        vErrors = vErrors === null ? validate23.errors : vErrors.concat(validate23.errors);
+                        errors = vErrors.length;
+                      }
+                      var valid0 = _errs16 === errors;
+                    } else {
+                      var valid0 = true;
+                    }
+                    if (valid0) {
+                      if (data.initialHeading !== undefined) {
+                        const _errs17 = errors;
+                        if (
+                          !validate23(data.initialHeading, {
+                            instancePath: instancePath + '/initialHeading',
+                            parentData: data,
+                            parentDataProperty: 'initialHeading',
+                            rootData,
+                          })
+                        ) {
+                          vErrors = vErrors === null ? validate23.errors : vErrors.concat(validate23.errors);
+                          errors = vErrors.length;
+                        }
+                        var valid0 = _errs17 === errors;
+                      } else {
+                        var valid0 = true;
+                      }
+                      if (valid0) {
+                        if (data.segments !== undefined) {
+                          let data12 = data.segments;
+                          const _errs18 = errors;
+                          if (errors === _errs18) {
+                            if (Array.isArray(data12)) {
+                              if (data12.length > 500) {
+                                validate17.errors = [
+                                  {
+                                    instancePath: instancePath + '/segments',
+                                    schemaPath: '#/properties/segments/maxItems',
+                                    keyword: 'maxItems',
+                                    params: { limit: 500 },
+                                    message: 'must NOT have more than 500 items',
+                                    schema: 500,
+                                    parentSchema: schema21.properties.segments,
+                                    data: data12,
+                                  },
+                                ];
+                                return false;
+                              } else {
+                                if (data12.length < 1) {
+                                  validate17.errors = [
+                                    {
+                                      instancePath: instancePath + '/segments',
+                                      schemaPath: '#/properties/segments/minItems',
+                                      keyword: 'minItems',
+                                      params: { limit: 1 },
+                                      message: 'must NOT have fewer than 1 items',
+                                      schema: 1,
+                                      parentSchema: schema21.properties.segments,
+                                      data: data12,
+                                    },
+                                  ];
+                                  return false;
+                                } else {
+                                  var valid3 = true;
+                                  const len0 = data12.length;
+                                  for (let i0 = 0; i0 < len0; i0++) {
+                                    const _errs20 = errors;
+                                    if (
+                                      !validate29(data12[i0], {
+                                        instancePath: instancePath + '/segments/' + i0,
+                                        parentData: data12,
+                                        parentDataProperty: i0,
+                                        rootData,
+                                      })
+                                    ) {
+                                      vErrors =
+                                        vErrors === null ? validate29.errors : vErrors.concat(validate29.errors);
+                                      errors = vErrors.length;
+                                    }
+                                    var valid3 = _errs20 === errors;
+                                    if (!valid3) {
+                                      break;
+                                    }
+                                  }
+                                }
+                              }
+                            } else {
+                              validate17.errors = [
+                                {
+                                  instancePath: instancePath + '/segments',
+                                  schemaPath: '#/properties/segments/type',
+                                  keyword: 'type',
+                                  params: { type: 'array' },
+                                  message: 'must be array',
+                                  schema: schema21.properties.segments.type,
+                                  parentSchema: schema21.properties.segments,
+                                  data: data12,
+                                },
+                              ];
+                              return false;
+                            }
+                          }
+                          var valid0 = _errs18 === errors;
+                        } else {
+                          var valid0 = true;
+                        }
+                      }
+                    }
                   }
                 }
               }
@@ -2078,10 +2364,35 @@ const schema32 = {
     },
     kind: {
       description: 'Which sensor model applies.',
-      enum: ['yaw-gyro', 'wheel-speed', 'gnss-position', 'compass', 'range-bearing'],
+      enum: [
+        'yaw-gyro',
+        'wheel-speed',
+        'gnss-position',
+        'compass',
+        'range-bearing',
+        'imu',
+        'gnss-velocity',
+        'barometer',
+        'heading-aid',
+        'zero-velocity',
+        'motion-constraint',
+        'odometer',
+      ],
     },
     note: { description: 'Free text: part, mounting, why it is in the suite.', $ref: '#/definitions/note' },
     rate: { description: 'Output or measurement rate (a frequency).', $ref: '#/definitions/quantity' },
+    leverArm: {
+      description:
+        "Inertial budgets, GNSS position only: the antenna's position from the IMU in the body frame (x forward, y right, z down), a known setting with no uncertainty.",
+      type: 'object',
+      additionalProperties: false,
+      required: ['x', 'y', 'z'],
+      properties: {
+        x: { description: 'Forward offset (a length).', $ref: '#/definitions/quantity' },
+        y: { description: 'Right offset (a length).', $ref: '#/definitions/quantity' },
+        z: { description: 'Down offset (a length).', $ref: '#/definitions/quantity' },
+      },
+    },
     observables: {
       description: 'Range-bearing sensors only: which observables it reports (default both).',
       enum: ['range', 'bearing', 'range-bearing'],
@@ -2106,6 +2417,13 @@ const schema32 = {
       maxItems: 100,
       items: { $ref: '#/definitions/outage' },
     },
+    windows: {
+      description:
+        'Inertial budgets, zero-velocity sensors only: spans [start, end) of mission time in which the update is used; each must lie inside a stop of the path (speed and vertical speed zero). Omitted: used at every stop.',
+      type: 'array',
+      maxItems: 100,
+      items: { $ref: '#/definitions/outage' },
+    },
     sources: {
       description: "The sensor's error sources, one row each.",
       type: 'array',
@@ -2126,7 +2444,7 @@ const schema35 = {
     note: { description: 'Free text about the landmark.', $ref: '#/definitions/note' },
   },
 };
-function validate35(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
+function validate44(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
   let vErrors = null;
   let errors = 0;
   if (errors === 0) {
@@ -2137,7 +2455,7 @@ function validate35(data, { instancePath = '', parentData, parentDataProperty, r
         (data.north === undefined && (missing0 = 'north')) ||
         (data.east === undefined && (missing0 = 'east'))
       ) {
-        validate35.errors = [
+        validate44.errors = [
           {
             instancePath,
             schemaPath: '#/required',
@@ -2154,7 +2472,7 @@ function validate35(data, { instancePath = '', parentData, parentDataProperty, r
         const _errs1 = errors;
         for (const key0 in data) {
           if (!(key0 === 'id' || key0 === 'north' || key0 === 'east' || key0 === 'note')) {
-            validate35.errors = [
+            validate44.errors = [
               {
                 instancePath,
                 schemaPath: '#/additionalProperties',
@@ -2178,7 +2496,7 @@ function validate35(data, { instancePath = '', parentData, parentDataProperty, r
             if (errors === _errs3) {
               if (typeof data0 === 'string') {
                 if (!pattern4.test(data0)) {
-                  validate35.errors = [
+                  validate44.errors = [
                     {
                       instancePath: instancePath + '/id',
                       schemaPath: '#/definitions/id/pattern',
@@ -2193,7 +2511,7 @@ function validate35(data, { instancePath = '', parentData, parentDataProperty, r
                   return false;
                 }
               } else {
-                validate35.errors = [
+                validate44.errors = [
                   {
                     instancePath: instancePath + '/id',
                     schemaPath: '#/definitions/id/type',
@@ -2256,7 +2574,7 @@ function validate35(data, { instancePath = '', parentData, parentDataProperty, r
                   if (errors === _errs8) {
                     if (typeof data3 === 'string') {
                       if (func3(data3) > 2000) {
-                        validate35.errors = [
+                        validate44.errors = [
                           {
                             instancePath: instancePath + '/note',
                             schemaPath: '#/definitions/note/maxLength',
@@ -2271,7 +2589,7 @@ function validate35(data, { instancePath = '', parentData, parentDataProperty, r
                         return false;
                       }
                     } else {
-                      validate35.errors = [
+                      validate44.errors = [
                         {
                           instancePath: instancePath + '/note',
                           schemaPath: '#/definitions/note/type',
@@ -2296,7 +2614,7 @@ function validate35(data, { instancePath = '', parentData, parentDataProperty, r
         }
       }
     } else {
-      validate35.errors = [
+      validate44.errors = [
         {
           instancePath,
           schemaPath: '#/type',
@@ -2311,7 +2629,7 @@ function validate35(data, { instancePath = '', parentData, parentDataProperty, r
       return false;
     }
   }
-  validate35.errors = vErrors;
+  validate44.errors = vErrors;
   return errors === 0;
 }
 const schema38 = {
@@ -2326,14 +2644,14 @@ const schema38 = {
     note: { description: 'Free text: what causes the outage.', $ref: '#/definitions/note' },
   },
 };
-function validate39(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
+function validate48(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
   let vErrors = null;
   let errors = 0;
   if (errors === 0) {
     if (data && typeof data == 'object' && !Array.isArray(data)) {
       let missing0;
       if ((data.start === undefined && (missing0 = 'start')) || (data.end === undefined && (missing0 = 'end'))) {
-        validate39.errors = [
+        validate48.errors = [
           {
             instancePath,
             schemaPath: '#/required',
@@ -2350,7 +2668,7 @@ function validate39(data, { instancePath = '', parentData, parentDataProperty, r
         const _errs1 = errors;
         for (const key0 in data) {
           if (!(key0 === 'id' || key0 === 'start' || key0 === 'end' || key0 === 'note')) {
-            validate39.errors = [
+            validate48.errors = [
               {
                 instancePath,
                 schemaPath: '#/additionalProperties',
@@ -2374,7 +2692,7 @@ function validate39(data, { instancePath = '', parentData, parentDataProperty, r
             if (errors === _errs3) {
               if (typeof data0 === 'string') {
                 if (!pattern4.test(data0)) {
-                  validate39.errors = [
+                  validate48.errors = [
                     {
                       instancePath: instancePath + '/id',
                       schemaPath: '#/definitions/id/pattern',
@@ -2389,7 +2707,7 @@ function validate39(data, { instancePath = '', parentData, parentDataProperty, r
                   return false;
                 }
               } else {
-                validate39.errors = [
+                validate48.errors = [
                   {
                     instancePath: instancePath + '/id',
                     schemaPath: '#/definitions/id/type',
@@ -2452,7 +2770,7 @@ function validate39(data, { instancePath = '', parentData, parentDataProperty, r
                   if (errors === _errs8) {
                     if (typeof data3 === 'string') {
                       if (func3(data3) > 2000) {
-                        validate39.errors = [
+                        validate48.errors = [
                           {
                             instancePath: instancePath + '/note',
                             schemaPath: '#/definitions/note/maxLength',
@@ -2467,7 +2785,7 @@ function validate39(data, { instancePath = '', parentData, parentDataProperty, r
                         return false;
                       }
                     } else {
-                      validate39.errors = [
+                      validate48.errors = [
                         {
                           instancePath: instancePath + '/note',
                           schemaPath: '#/definitions/note/type',
@@ -2492,7 +2810,7 @@ function validate39(data, { instancePath = '', parentData, parentDataProperty, r
         }
       }
     } else {
-      validate39.errors = [
+      validate48.errors = [
         {
           instancePath,
           schemaPath: '#/type',
@@ -2507,7 +2825,7 @@ function validate39(data, { instancePath = '', parentData, parentDataProperty, r
       return false;
     }
   }
-  validate39.errors = vErrors;
+  validate48.errors = vErrors;
   return errors === 0;
 }
 const schema41 = {
@@ -2533,11 +2851,22 @@ const schema41 = {
         'multipath',
       ],
     },
+    instrument: { description: 'IMU rows only: the instrument the row belongs to.', enum: ['gyro', 'accelerometer'] },
+    axis: {
+      description:
+        'IMU rows only: the body axis the row applies to; omitted means all three. A row naming an axis replaces the all-axes row of its instrument and kind on that axis.',
+      enum: ['x', 'y', 'z'],
+    },
     value: {
       description: "The magnitude cell (sigma, coefficient, density, LSB): a number or a formula starting with '='.",
       $ref: '#/definitions/cell',
     },
     unit: { description: 'The unit the magnitude is written in.', $ref: '#/definitions/unit' },
+    vertical: {
+      description:
+        'Inertial GNSS rows (white noise, multipath): the vertical 1-sigma; the value above is per horizontal axis. Omitted means the same as horizontal. Formula name sensorId.rowId.vertical.',
+      $ref: '#/definitions/quantity',
+    },
     correlationTime: {
       description:
         'Correlation time (bias instability, multipath as states); formula name sensorId.rowId.correlationTime.',
@@ -2616,7 +2945,7 @@ const schema47 = {
     note: { description: 'Why the filter is tuned this way.', $ref: '#/definitions/note' },
   },
 };
-function validate46(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
+function validate57(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
   let vErrors = null;
   let errors = 0;
   if (errors === 0) {
@@ -2631,7 +2960,7 @@ function validate46(data, { instancePath = '', parentData, parentDataProperty, r
           key0 === 'model' ||
           key0 === 'note'
         )) {
-          validate46.errors = [
+          validate57.errors = [
             {
               instancePath,
               schemaPath: '#/additionalProperties',
@@ -2690,7 +3019,7 @@ function validate46(data, { instancePath = '', parentData, parentDataProperty, r
               if (errors === _errs4) {
                 if (typeof data2 == 'number' && isFinite(data2)) {
                   if (data2 > 1000000 || isNaN(data2)) {
-                    validate46.errors = [
+                    validate57.errors = [
                       {
                         instancePath: instancePath + '/inflation',
                         schemaPath: '#/properties/inflation/maximum',
@@ -2705,7 +3034,7 @@ function validate46(data, { instancePath = '', parentData, parentDataProperty, r
                     return false;
                   } else {
                     if (data2 <= 0 || isNaN(data2)) {
-                      validate46.errors = [
+                      validate57.errors = [
                         {
                           instancePath: instancePath + '/inflation',
                           schemaPath: '#/properties/inflation/exclusiveMinimum',
@@ -2721,7 +3050,7 @@ function validate46(data, { instancePath = '', parentData, parentDataProperty, r
                     }
                   }
                 } else {
-                  validate46.errors = [
+                  validate57.errors = [
                     {
                       instancePath: instancePath + '/inflation',
                       schemaPath: '#/properties/inflation/type',
@@ -2745,7 +3074,7 @@ function validate46(data, { instancePath = '', parentData, parentDataProperty, r
                 let data3 = data.leftOut;
                 const _errs6 = errors;
                 if (typeof data3 !== 'boolean') {
-                  validate46.errors = [
+                  validate57.errors = [
                     {
                       instancePath: instancePath + '/leftOut',
                       schemaPath: '#/properties/leftOut/type',
@@ -2773,7 +3102,7 @@ function validate46(data, { instancePath = '', parentData, parentDataProperty, r
                     data4 === 'folded' ||
                     data4 === 'states'
                   )) {
-                    validate46.errors = [
+                    validate57.errors = [
                       {
                         instancePath: instancePath + '/model',
                         schemaPath: '#/properties/model/enum',
@@ -2799,7 +3128,7 @@ function validate46(data, { instancePath = '', parentData, parentDataProperty, r
                     if (errors === _errs10) {
                       if (typeof data5 === 'string') {
                         if (func3(data5) > 2000) {
-                          validate46.errors = [
+                          validate57.errors = [
                             {
                               instancePath: instancePath + '/note',
                               schemaPath: '#/definitions/note/maxLength',
@@ -2814,7 +3143,7 @@ function validate46(data, { instancePath = '', parentData, parentDataProperty, r
                           return false;
                         }
                       } else {
-                        validate46.errors = [
+                        validate57.errors = [
                           {
                             instancePath: instancePath + '/note',
                             schemaPath: '#/definitions/note/type',
@@ -2840,7 +3169,7 @@ function validate46(data, { instancePath = '', parentData, parentDataProperty, r
         }
       }
     } else {
-      validate46.errors = [
+      validate57.errors = [
         {
           instancePath,
           schemaPath: '#/type',
@@ -2855,10 +3184,10 @@ function validate46(data, { instancePath = '', parentData, parentDataProperty, r
       return false;
     }
   }
-  validate46.errors = vErrors;
+  validate57.errors = vErrors;
   return errors === 0;
 }
-function validate43(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
+function validate53(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
   let vErrors = null;
   let errors = 0;
   if (errors === 0) {
@@ -2872,7 +3201,7 @@ function validate43(data, { instancePath = '', parentData, parentDataProperty, r
         (data.provenance === undefined && (missing0 = 'provenance')) ||
         (data.assumed === undefined && (missing0 = 'assumed'))
       ) {
-        validate43.errors = [
+        validate53.errors = [
           {
             instancePath,
             schemaPath: '#/required',
@@ -2889,7 +3218,7 @@ function validate43(data, { instancePath = '', parentData, parentDataProperty, r
         const _errs1 = errors;
         for (const key0 in data) {
           if (!func2.call(schema41.properties, key0)) {
-            validate43.errors = [
+            validate53.errors = [
               {
                 instancePath,
                 schemaPath: '#/additionalProperties',
@@ -2913,7 +3242,7 @@ function validate43(data, { instancePath = '', parentData, parentDataProperty, r
             if (errors === _errs3) {
               if (typeof data0 === 'string') {
                 if (!pattern4.test(data0)) {
-                  validate43.errors = [
+                  validate53.errors = [
                     {
                       instancePath: instancePath + '/id',
                       schemaPath: '#/definitions/id/pattern',
@@ -2928,7 +3257,7 @@ function validate43(data, { instancePath = '', parentData, parentDataProperty, r
                   return false;
                 }
               } else {
-                validate43.errors = [
+                validate53.errors = [
                   {
                     instancePath: instancePath + '/id',
                     schemaPath: '#/definitions/id/type',
@@ -2960,7 +3289,7 @@ function validate43(data, { instancePath = '', parentData, parentDataProperty, r
                 data1 === 'quantisation' ||
                 data1 === 'multipath'
               )) {
-                validate43.errors = [
+                validate53.errors = [
                   {
                     instancePath: instancePath + '/kind',
                     schemaPath: '#/properties/kind/enum',
@@ -2979,257 +3308,252 @@ function validate43(data, { instancePath = '', parentData, parentDataProperty, r
               var valid0 = true;
             }
             if (valid0) {
-              if (data.value !== undefined) {
-                let data2 = data.value;
+              if (data.instrument !== undefined) {
+                let data2 = data.instrument;
                 const _errs6 = errors;
-                const _errs7 = errors;
-                if (!(typeof data2 == 'number' && isFinite(data2)) && typeof data2 !== 'string') {
-                  validate43.errors = [
+                if (!(data2 === 'gyro' || data2 === 'accelerometer')) {
+                  validate53.errors = [
                     {
-                      instancePath: instancePath + '/value',
-                      schemaPath: '#/definitions/cell/type',
-                      keyword: 'type',
-                      params: { type: schema14.type },
-                      message: 'must be number,string',
-                      schema: schema14.type,
-                      parentSchema: schema14,
+                      instancePath: instancePath + '/instrument',
+                      schemaPath: '#/properties/instrument/enum',
+                      keyword: 'enum',
+                      params: { allowedValues: schema41.properties.instrument.enum },
+                      message: 'must be equal to one of the allowed values',
+                      schema: schema41.properties.instrument.enum,
+                      parentSchema: schema41.properties.instrument,
                       data: data2,
                     },
                   ];
                   return false;
-                }
-                if (errors === _errs7) {
-                  if (typeof data2 === 'string') {
-                    if (func3(data2) > 1000) {
-                      validate43.errors = [
-                        {
-                          instancePath: instancePath + '/value',
-                          schemaPath: '#/definitions/cell/maxLength',
-                          keyword: 'maxLength',
-                          params: { limit: 1000 },
-                          message: 'must NOT have more than 1000 characters',
-                          schema: 1000,
-                          parentSchema: schema14,
-                          data: data2,
-                        },
-                      ];
-                      return false;
-                    } else {
-                      if (func3(data2) < 2) {
-                        validate43.errors = [
-                          {
-                            instancePath: instancePath + '/value',
-                            schemaPath: '#/definitions/cell/minLength',
-                            keyword: 'minLength',
-                            params: { limit: 2 },
-                            message: 'must NOT have fewer than 2 characters',
-                            schema: 2,
-                            parentSchema: schema14,
-                            data: data2,
-                          },
-                        ];
-                        return false;
-                      } else {
-                        if (!pattern0.test(data2)) {
-                          validate43.errors = [
-                            {
-                              instancePath: instancePath + '/value',
-                              schemaPath: '#/definitions/cell/pattern',
-                              keyword: 'pattern',
-                              params: { pattern: '^=' },
-                              message: 'must match pattern "' + '^=' + '"',
-                              schema: '^=',
-                              parentSchema: schema14,
-                              data: data2,
-                            },
-                          ];
-                          return false;
-                        }
-                      }
-                    }
-                  }
                 }
                 var valid0 = _errs6 === errors;
               } else {
                 var valid0 = true;
               }
               if (valid0) {
-                if (data.unit !== undefined) {
-                  let data3 = data.unit;
-                  const _errs9 = errors;
-                  const _errs10 = errors;
-                  if (errors === _errs10) {
-                    if (typeof data3 === 'string') {
-                      if (func3(data3) > 64) {
-                        validate43.errors = [
-                          {
-                            instancePath: instancePath + '/unit',
-                            schemaPath: '#/definitions/unit/maxLength',
-                            keyword: 'maxLength',
-                            params: { limit: 64 },
-                            message: 'must NOT have more than 64 characters',
-                            schema: 64,
-                            parentSchema: schema15,
-                            data: data3,
-                          },
-                        ];
-                        return false;
-                      } else {
-                        if (func3(data3) < 1) {
-                          validate43.errors = [
+                if (data.axis !== undefined) {
+                  let data3 = data.axis;
+                  const _errs7 = errors;
+                  if (!(data3 === 'x' || data3 === 'y' || data3 === 'z')) {
+                    validate53.errors = [
+                      {
+                        instancePath: instancePath + '/axis',
+                        schemaPath: '#/properties/axis/enum',
+                        keyword: 'enum',
+                        params: { allowedValues: schema41.properties.axis.enum },
+                        message: 'must be equal to one of the allowed values',
+                        schema: schema41.properties.axis.enum,
+                        parentSchema: schema41.properties.axis,
+                        data: data3,
+                      },
+                    ];
+                    return false;
+                  }
+                  var valid0 = _errs7 === errors;
+                } else {
+                  var valid0 = true;
+                }
+                if (valid0) {
+                  if (data.value !== undefined) {
+                    let data4 = data.value;
+                    const _errs8 = errors;
+                    const _errs9 = errors;
+                    if (!(typeof data4 == 'number' && isFinite(data4)) && typeof data4 !== 'string') {
+                      validate53.errors = [
+                        {
+                          instancePath: instancePath + '/value',
+                          schemaPath: '#/definitions/cell/type',
+                          keyword: 'type',
+                          params: { type: schema14.type },
+                          message: 'must be number,string',
+                          schema: schema14.type,
+                          parentSchema: schema14,
+                          data: data4,
+                        },
+                      ];
+                      return false;
+                    }
+                    if (errors === _errs9) {
+                      if (typeof data4 === 'string') {
+                        if (func3(data4) > 1000) {
+                          validate53.errors = [
+                            {
+                              instancePath: instancePath + '/value',
+                              schemaPath: '#/definitions/cell/maxLength',
+                              keyword: 'maxLength',
+                              params: { limit: 1000 },
+                              message: 'must NOT have more than 1000 characters',
+                              schema: 1000,
+                              parentSchema: schema14,
+                              data: data4,
+                            },
+                          ];
+                          return false;
+                        } else {
+                          if (func3(data4) < 2) {
+                            validate53.errors = [
+                              {
+                                instancePath: instancePath + '/value',
+                                schemaPath: '#/definitions/cell/minLength',
+                                keyword: 'minLength',
+                                params: { limit: 2 },
+                                message: 'must NOT have fewer than 2 characters',
+                                schema: 2,
+                                parentSchema: schema14,
+                                data: data4,
+                              },
+                            ];
+                            return false;
+                          } else {
+                            if (!pattern0.test(data4)) {
+                              validate53.errors = [
+                                {
+                                  instancePath: instancePath + '/value',
+                                  schemaPath: '#/definitions/cell/pattern',
+                                  keyword: 'pattern',
+                                  params: { pattern: '^=' },
+                                  message: 'must match pattern "' + '^=' + '"',
+                                  schema: '^=',
+                                  parentSchema: schema14,
+                                  data: data4,
+                                },
+                              ];
+                              return false;
+                            }
+                          }
+                        }
+                      }
+                    }
+                    var valid0 = _errs8 === errors;
+                  } else {
+                    var valid0 = true;
+                  }
+                  if (valid0) {
+                    if (data.unit !== undefined) {
+                      let data5 = data.unit;
+                      const _errs11 = errors;
+                      const _errs12 = errors;
+                      if (errors === _errs12) {
+                        if (typeof data5 === 'string') {
+                          if (func3(data5) > 64) {
+                            validate53.errors = [
+                              {
+                                instancePath: instancePath + '/unit',
+                                schemaPath: '#/definitions/unit/maxLength',
+                                keyword: 'maxLength',
+                                params: { limit: 64 },
+                                message: 'must NOT have more than 64 characters',
+                                schema: 64,
+                                parentSchema: schema15,
+                                data: data5,
+                              },
+                            ];
+                            return false;
+                          } else {
+                            if (func3(data5) < 1) {
+                              validate53.errors = [
+                                {
+                                  instancePath: instancePath + '/unit',
+                                  schemaPath: '#/definitions/unit/minLength',
+                                  keyword: 'minLength',
+                                  params: { limit: 1 },
+                                  message: 'must NOT have fewer than 1 characters',
+                                  schema: 1,
+                                  parentSchema: schema15,
+                                  data: data5,
+                                },
+                              ];
+                              return false;
+                            }
+                          }
+                        } else {
+                          validate53.errors = [
                             {
                               instancePath: instancePath + '/unit',
-                              schemaPath: '#/definitions/unit/minLength',
-                              keyword: 'minLength',
-                              params: { limit: 1 },
-                              message: 'must NOT have fewer than 1 characters',
-                              schema: 1,
+                              schemaPath: '#/definitions/unit/type',
+                              keyword: 'type',
+                              params: { type: 'string' },
+                              message: 'must be string',
+                              schema: schema15.type,
                               parentSchema: schema15,
-                              data: data3,
+                              data: data5,
                             },
                           ];
                           return false;
                         }
                       }
-                    } else {
-                      validate43.errors = [
-                        {
-                          instancePath: instancePath + '/unit',
-                          schemaPath: '#/definitions/unit/type',
-                          keyword: 'type',
-                          params: { type: 'string' },
-                          message: 'must be string',
-                          schema: schema15.type,
-                          parentSchema: schema15,
-                          data: data3,
-                        },
-                      ];
-                      return false;
-                    }
-                  }
-                  var valid0 = _errs9 === errors;
-                } else {
-                  var valid0 = true;
-                }
-                if (valid0) {
-                  if (data.correlationTime !== undefined) {
-                    const _errs12 = errors;
-                    if (
-                      !validate12(data.correlationTime, {
-                        instancePath: instancePath + '/correlationTime',
-                        parentData: data,
-                        parentDataProperty: 'correlationTime',
-                        rootData,
-                      })
-                    ) {
-                      vErrors = vErrors === null ? validate12.errors : vErrors.concat(validate12.errors);
-                      errors = vErrors.length;
-                    }
-                    var valid0 = _errs12 === errors;
-                  } else {
-                    var valid0 = true;
-                  }
-                  if (valid0) {
-                    if (data.rate !== undefined) {
-                      const _errs13 = errors;
-                      if (
-                        !validate12(data.rate, {
-                          instancePath: instancePath + '/rate',
-                          parentData: data,
-                          parentDataProperty: 'rate',
-                          rootData,
-                        })
-                      ) {
-                        vErrors = vErrors === null ? validate12.errors : vErrors.concat(validate12.errors);
-                        errors = vErrors.length;
-                      }
-                      var valid0 = _errs13 === errors;
+                      var valid0 = _errs11 === errors;
                     } else {
                       var valid0 = true;
                     }
                     if (valid0) {
-                      if (data.biasForm !== undefined) {
-                        let data6 = data.biasForm;
+                      if (data.vertical !== undefined) {
                         const _errs14 = errors;
-                        if (!(data6 === 'floor' || data6 === 'flicker-coefficient')) {
-                          validate43.errors = [
-                            {
-                              instancePath: instancePath + '/biasForm',
-                              schemaPath: '#/properties/biasForm/enum',
-                              keyword: 'enum',
-                              params: { allowedValues: schema41.properties.biasForm.enum },
-                              message: 'must be equal to one of the allowed values',
-                              schema: schema41.properties.biasForm.enum,
-                              parentSchema: schema41.properties.biasForm,
-                              data: data6,
-                            },
-                          ];
-                          return false;
+                        if (
+                          !validate12(data.vertical, {
+                            instancePath: instancePath + '/vertical',
+                            parentData: data,
+                            parentDataProperty: 'vertical',
+                            rootData,
+                          })
+                        ) {
+                          vErrors = vErrors === null ? validate12.errors : vErrors.concat(validate12.errors);
+                          errors = vErrors.length;
                         }
                         var valid0 = _errs14 === errors;
                       } else {
                         var valid0 = true;
                       }
                       if (valid0) {
-                        if (data.densitySides !== undefined) {
-                          let data7 = data.densitySides;
+                        if (data.correlationTime !== undefined) {
                           const _errs15 = errors;
-                          if (!(data7 === 'two' || data7 === 'one')) {
-                            validate43.errors = [
-                              {
-                                instancePath: instancePath + '/densitySides',
-                                schemaPath: '#/properties/densitySides/enum',
-                                keyword: 'enum',
-                                params: { allowedValues: schema41.properties.densitySides.enum },
-                                message: 'must be equal to one of the allowed values',
-                                schema: schema41.properties.densitySides.enum,
-                                parentSchema: schema41.properties.densitySides,
-                                data: data7,
-                              },
-                            ];
-                            return false;
+                          if (
+                            !validate12(data.correlationTime, {
+                              instancePath: instancePath + '/correlationTime',
+                              parentData: data,
+                              parentDataProperty: 'correlationTime',
+                              rootData,
+                            })
+                          ) {
+                            vErrors = vErrors === null ? validate12.errors : vErrors.concat(validate12.errors);
+                            errors = vErrors.length;
                           }
                           var valid0 = _errs15 === errors;
                         } else {
                           var valid0 = true;
                         }
                         if (valid0) {
-                          if (data.quantum !== undefined) {
-                            let data8 = data.quantum;
+                          if (data.rate !== undefined) {
                             const _errs16 = errors;
-                            if (!(data8 === 'rate' || data8 === 'angle')) {
-                              validate43.errors = [
-                                {
-                                  instancePath: instancePath + '/quantum',
-                                  schemaPath: '#/properties/quantum/enum',
-                                  keyword: 'enum',
-                                  params: { allowedValues: schema41.properties.quantum.enum },
-                                  message: 'must be equal to one of the allowed values',
-                                  schema: schema41.properties.quantum.enum,
-                                  parentSchema: schema41.properties.quantum,
-                                  data: data8,
-                                },
-                              ];
-                              return false;
+                            if (
+                              !validate12(data.rate, {
+                                instancePath: instancePath + '/rate',
+                                parentData: data,
+                                parentDataProperty: 'rate',
+                                rootData,
+                              })
+                            ) {
+                              vErrors = vErrors === null ? validate12.errors : vErrors.concat(validate12.errors);
+                              errors = vErrors.length;
                             }
                             var valid0 = _errs16 === errors;
                           } else {
                             var valid0 = true;
                           }
                           if (valid0) {
-                            if (data.multipathModel !== undefined) {
-                              let data9 = data.multipathModel;
+                            if (data.biasForm !== undefined) {
+                              let data9 = data.biasForm;
                               const _errs17 = errors;
-                              if (!(data9 === 'states' || data9 === 'folded')) {
-                                validate43.errors = [
+                              if (!(data9 === 'floor' || data9 === 'flicker-coefficient')) {
+                                validate53.errors = [
                                   {
-                                    instancePath: instancePath + '/multipathModel',
-                                    schemaPath: '#/properties/multipathModel/enum',
+                                    instancePath: instancePath + '/biasForm',
+                                    schemaPath: '#/properties/biasForm/enum',
                                     keyword: 'enum',
-                                    params: { allowedValues: schema41.properties.multipathModel.enum },
+                                    params: { allowedValues: schema41.properties.biasForm.enum },
                                     message: 'must be equal to one of the allowed values',
-                                    schema: schema41.properties.multipathModel.enum,
-                                    parentSchema: schema41.properties.multipathModel,
+                                    schema: schema41.properties.biasForm.enum,
+                                    parentSchema: schema41.properties.biasForm,
                                     data: data9,
                                   },
                                 ];
@@ -3240,19 +3564,19 @@ function validate43(data, { instancePath = '', parentData, parentDataProperty, r
                               var valid0 = true;
                             }
                             if (valid0) {
-                              if (data.component !== undefined) {
-                                let data10 = data.component;
+                              if (data.densitySides !== undefined) {
+                                let data10 = data.densitySides;
                                 const _errs18 = errors;
-                                if (!(data10 === 'range' || data10 === 'bearing')) {
-                                  validate43.errors = [
+                                if (!(data10 === 'two' || data10 === 'one')) {
+                                  validate53.errors = [
                                     {
-                                      instancePath: instancePath + '/component',
-                                      schemaPath: '#/properties/component/enum',
+                                      instancePath: instancePath + '/densitySides',
+                                      schemaPath: '#/properties/densitySides/enum',
                                       keyword: 'enum',
-                                      params: { allowedValues: schema41.properties.component.enum },
+                                      params: { allowedValues: schema41.properties.densitySides.enum },
                                       message: 'must be equal to one of the allowed values',
-                                      schema: schema41.properties.component.enum,
-                                      parentSchema: schema41.properties.component,
+                                      schema: schema41.properties.densitySides.enum,
+                                      parentSchema: schema41.properties.densitySides,
                                       data: data10,
                                     },
                                   ];
@@ -3263,130 +3587,204 @@ function validate43(data, { instancePath = '', parentData, parentDataProperty, r
                                 var valid0 = true;
                               }
                               if (valid0) {
-                                if (data.provenance !== undefined) {
-                                  let data11 = data.provenance;
+                                if (data.quantum !== undefined) {
+                                  let data11 = data.quantum;
                                   const _errs19 = errors;
-                                  const _errs20 = errors;
-                                  if (errors === _errs20) {
-                                    if (typeof data11 === 'string') {
-                                      if (func3(data11) > 1000) {
-                                        validate43.errors = [
-                                          {
-                                            instancePath: instancePath + '/provenance',
-                                            schemaPath: '#/definitions/provenance/maxLength',
-                                            keyword: 'maxLength',
-                                            params: { limit: 1000 },
-                                            message: 'must NOT have more than 1000 characters',
-                                            schema: 1000,
-                                            parentSchema: schema26,
-                                            data: data11,
-                                          },
-                                        ];
-                                        return false;
-                                      }
-                                    } else {
-                                      validate43.errors = [
-                                        {
-                                          instancePath: instancePath + '/provenance',
-                                          schemaPath: '#/definitions/provenance/type',
-                                          keyword: 'type',
-                                          params: { type: 'string' },
-                                          message: 'must be string',
-                                          schema: schema26.type,
-                                          parentSchema: schema26,
-                                          data: data11,
-                                        },
-                                      ];
-                                      return false;
-                                    }
+                                  if (!(data11 === 'rate' || data11 === 'angle')) {
+                                    validate53.errors = [
+                                      {
+                                        instancePath: instancePath + '/quantum',
+                                        schemaPath: '#/properties/quantum/enum',
+                                        keyword: 'enum',
+                                        params: { allowedValues: schema41.properties.quantum.enum },
+                                        message: 'must be equal to one of the allowed values',
+                                        schema: schema41.properties.quantum.enum,
+                                        parentSchema: schema41.properties.quantum,
+                                        data: data11,
+                                      },
+                                    ];
+                                    return false;
                                   }
                                   var valid0 = _errs19 === errors;
                                 } else {
                                   var valid0 = true;
                                 }
                                 if (valid0) {
-                                  if (data.assumed !== undefined) {
-                                    let data12 = data.assumed;
-                                    const _errs22 = errors;
-                                    if (typeof data12 !== 'boolean') {
-                                      validate43.errors = [
+                                  if (data.multipathModel !== undefined) {
+                                    let data12 = data.multipathModel;
+                                    const _errs20 = errors;
+                                    if (!(data12 === 'states' || data12 === 'folded')) {
+                                      validate53.errors = [
                                         {
-                                          instancePath: instancePath + '/assumed',
-                                          schemaPath: '#/definitions/assumed/type',
-                                          keyword: 'type',
-                                          params: { type: 'boolean' },
-                                          message: 'must be boolean',
-                                          schema: schema27.type,
-                                          parentSchema: schema27,
+                                          instancePath: instancePath + '/multipathModel',
+                                          schemaPath: '#/properties/multipathModel/enum',
+                                          keyword: 'enum',
+                                          params: { allowedValues: schema41.properties.multipathModel.enum },
+                                          message: 'must be equal to one of the allowed values',
+                                          schema: schema41.properties.multipathModel.enum,
+                                          parentSchema: schema41.properties.multipathModel,
                                           data: data12,
                                         },
                                       ];
                                       return false;
                                     }
-                                    var valid0 = _errs22 === errors;
+                                    var valid0 = _errs20 === errors;
                                   } else {
                                     var valid0 = true;
                                   }
                                   if (valid0) {
-                                    if (data.tuning !== undefined) {
-                                      const _errs25 = errors;
-                                      if (
-                                        !validate46(data.tuning, {
-                                          instancePath: instancePath + '/tuning',
-                                          parentData: data,
-                                          parentDataProperty: 'tuning',
-                                          rootData,
-                                        })
-                                      ) {
-                                        vErrors =
-                                          vErrors === null ? validate46.errors : vErrors.concat(validate46.errors);
-                                        errors = vErrors.length;
+                                    if (data.component !== undefined) {
+                                      let data13 = data.component;
+                                      const _errs21 = errors;
+                                      if (!(data13 === 'range' || data13 === 'bearing')) {
+                                        validate53.errors = [
+                                          {
+                                            instancePath: instancePath + '/component',
+                                            schemaPath: '#/properties/component/enum',
+                                            keyword: 'enum',
+                                            params: { allowedValues: schema41.properties.component.enum },
+                                            message: 'must be equal to one of the allowed values',
+                                            schema: schema41.properties.component.enum,
+                                            parentSchema: schema41.properties.component,
+                                            data: data13,
+                                          },
+                                        ];
+                                        return false;
                                       }
-                                      var valid0 = _errs25 === errors;
+                                      var valid0 = _errs21 === errors;
                                     } else {
                                       var valid0 = true;
                                     }
                                     if (valid0) {
-                                      if (data.note !== undefined) {
-                                        let data14 = data.note;
-                                        const _errs26 = errors;
-                                        const _errs27 = errors;
-                                        if (errors === _errs27) {
+                                      if (data.provenance !== undefined) {
+                                        let data14 = data.provenance;
+                                        const _errs22 = errors;
+                                        const _errs23 = errors;
+                                        if (errors === _errs23) {
                                           if (typeof data14 === 'string') {
-                                            if (func3(data14) > 2000) {
-                                              validate43.errors = [
+                                            if (func3(data14) > 1000) {
+                                              validate53.errors = [
                                                 {
-                                                  instancePath: instancePath + '/note',
-                                                  schemaPath: '#/definitions/note/maxLength',
+                                                  instancePath: instancePath + '/provenance',
+                                                  schemaPath: '#/definitions/provenance/maxLength',
                                                   keyword: 'maxLength',
-                                                  params: { limit: 2000 },
-                                                  message: 'must NOT have more than 2000 characters',
-                                                  schema: 2000,
-                                                  parentSchema: schema20,
+                                                  params: { limit: 1000 },
+                                                  message: 'must NOT have more than 1000 characters',
+                                                  schema: 1000,
+                                                  parentSchema: schema26,
                                                   data: data14,
                                                 },
                                               ];
                                               return false;
                                             }
                                           } else {
-                                            validate43.errors = [
+                                            validate53.errors = [
                                               {
-                                                instancePath: instancePath + '/note',
-                                                schemaPath: '#/definitions/note/type',
+                                                instancePath: instancePath + '/provenance',
+                                                schemaPath: '#/definitions/provenance/type',
                                                 keyword: 'type',
                                                 params: { type: 'string' },
                                                 message: 'must be string',
-                                                schema: schema20.type,
-                                                parentSchema: schema20,
+                                                schema: schema26.type,
+                                                parentSchema: schema26,
                                                 data: data14,
                                               },
                                             ];
                                             return false;
                                           }
                                         }
-                                        var valid0 = _errs26 === errors;
+                                        var valid0 = _errs22 === errors;
                                       } else {
                                         var valid0 = true;
+                                      }
+                                      if (valid0) {
+                                        if (data.assumed !== undefined) {
+                                          let data15 = data.assumed;
+                                          const _errs25 = errors;
+                                          if (typeof data15 !== 'boolean') {
+                                            validate53.errors = [
+                                              {
+                                                instancePath: instancePath + '/assumed',
+                                                schemaPath: '#/definitions/assumed/type',
+                                                keyword: 'type',
+                                                params: { type: 'boolean' },
+                                                message: 'must be boolean',
+                                                schema: schema27.type,
+                                                parentSchema: schema27,
+                                                data: data15,
+                                              },
+                                            ];
+                                            return false;
+                                          }
+                                          var valid0 = _errs25 === errors;
+                                        } else {
+                                          var valid0 = true;
+                                        }
+                                        if (valid0) {
+                                          if (data.tuning !== undefined) {
+                                            const _errs28 = errors;
+                                            if (
+                                              !validate57(data.tuning, {
+                                                instancePath: instancePath + '/tuning',
+                                                parentData: data,
+                                                parentDataProperty: 'tuning',
+                                                rootData,
+                                              })
+                                            ) {
+                                              vErrors =
+                                                vErrors === null
+                                                  ? validate57.errors
+                                                  : vErrors.concat(validate57.errors);
+                                              errors = vErrors.length;
+                                            }
+                                            var valid0 = _errs28 === errors;
+                                          } else {
+                                            var valid0 = true;
+                                          }
+                                          if (valid0) {
+                                            if (data.note !== undefined) {
+                                              let data17 = data.note;
+                                              const _errs29 = errors;
+                                              const _errs30 = errors;
+                                              if (errors === _errs30) {
+                                                if (typeof data17 === 'string') {
+                                                  if (func3(data17) > 2000) {
+                                                    validate53.errors = [
+                                                      {
+                                                        instancePath: instancePath + '/note',
+                                                        schemaPath: '#/definitions/note/maxLength',
+                                                        keyword: 'maxLength',
+                                                        params: { limit: 2000 },
+                                                        message: 'must NOT have more than 2000 characters',
+                                                        schema: 2000,
+                                                        parentSchema: schema20,
+                                                        data: data17,
+                                                      },
+                                                    ];
+                                                    return false;
+                                                  }
+                                                } else {
+                                                  validate53.errors = [
+                                                    {
+                                                      instancePath: instancePath + '/note',
+                                                      schemaPath: '#/definitions/note/type',
+                                                      keyword: 'type',
+                                                      params: { type: 'string' },
+                                                      message: 'must be string',
+                                                      schema: schema20.type,
+                                                      parentSchema: schema20,
+                                                      data: data17,
+                                                    },
+                                                  ];
+                                                  return false;
+                                                }
+                                              }
+                                              var valid0 = _errs29 === errors;
+                                            } else {
+                                              var valid0 = true;
+                                            }
+                                          }
+                                        }
                                       }
                                     }
                                   }
@@ -3405,7 +3803,7 @@ function validate43(data, { instancePath = '', parentData, parentDataProperty, r
         }
       }
     } else {
-      validate43.errors = [
+      validate53.errors = [
         {
           instancePath,
           schemaPath: '#/type',
@@ -3420,10 +3818,10 @@ function validate43(data, { instancePath = '', parentData, parentDataProperty, r
       return false;
     }
   }
-  validate43.errors = vErrors;
+  validate53.errors = vErrors;
   return errors === 0;
 }
-function validate31(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
+function validate37(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
   let vErrors = null;
   let errors = 0;
   if (errors === 0) {
@@ -3435,7 +3833,7 @@ function validate31(data, { instancePath = '', parentData, parentDataProperty, r
         (data.rate === undefined && (missing0 = 'rate')) ||
         (data.sources === undefined && (missing0 = 'sources'))
       ) {
-        validate31.errors = [
+        validate37.errors = [
           {
             instancePath,
             schemaPath: '#/required',
@@ -3452,7 +3850,7 @@ function validate31(data, { instancePath = '', parentData, parentDataProperty, r
         const _errs1 = errors;
         for (const key0 in data) {
           if (!func2.call(schema32.properties, key0)) {
-            validate31.errors = [
+            validate37.errors = [
               {
                 instancePath,
                 schemaPath: '#/additionalProperties',
@@ -3476,7 +3874,7 @@ function validate31(data, { instancePath = '', parentData, parentDataProperty, r
             if (errors === _errs3) {
               if (typeof data0 === 'string') {
                 if (!pattern4.test(data0)) {
-                  validate31.errors = [
+                  validate37.errors = [
                     {
                       instancePath: instancePath + '/id',
                       schemaPath: '#/definitions/id/pattern',
@@ -3491,7 +3889,7 @@ function validate31(data, { instancePath = '', parentData, parentDataProperty, r
                   return false;
                 }
               } else {
-                validate31.errors = [
+                validate37.errors = [
                   {
                     instancePath: instancePath + '/id',
                     schemaPath: '#/definitions/id/type',
@@ -3519,9 +3917,16 @@ function validate31(data, { instancePath = '', parentData, parentDataProperty, r
                 data1 === 'wheel-speed' ||
                 data1 === 'gnss-position' ||
                 data1 === 'compass' ||
-                data1 === 'range-bearing'
+                data1 === 'range-bearing' ||
+                data1 === 'imu' ||
+                data1 === 'gnss-velocity' ||
+                data1 === 'barometer' ||
+                data1 === 'heading-aid' ||
+                data1 === 'zero-velocity' ||
+                data1 === 'motion-constraint' ||
+                data1 === 'odometer'
               )) {
-                validate31.errors = [
+                validate37.errors = [
                   {
                     instancePath: instancePath + '/kind',
                     schemaPath: '#/properties/kind/enum',
@@ -3547,7 +3952,7 @@ function validate31(data, { instancePath = '', parentData, parentDataProperty, r
                 if (errors === _errs7) {
                   if (typeof data2 === 'string') {
                     if (func3(data2) > 2000) {
-                      validate31.errors = [
+                      validate37.errors = [
                         {
                           instancePath: instancePath + '/note',
                           schemaPath: '#/definitions/note/maxLength',
@@ -3562,7 +3967,7 @@ function validate31(data, { instancePath = '', parentData, parentDataProperty, r
                       return false;
                     }
                   } else {
-                    validate31.errors = [
+                    validate37.errors = [
                       {
                         instancePath: instancePath + '/note',
                         schemaPath: '#/definitions/note/type',
@@ -3600,251 +4005,440 @@ function validate31(data, { instancePath = '', parentData, parentDataProperty, r
                   var valid0 = true;
                 }
                 if (valid0) {
-                  if (data.observables !== undefined) {
-                    let data4 = data.observables;
+                  if (data.leverArm !== undefined) {
+                    let data4 = data.leverArm;
                     const _errs10 = errors;
-                    if (!(data4 === 'range' || data4 === 'bearing' || data4 === 'range-bearing')) {
-                      validate31.errors = [
-                        {
-                          instancePath: instancePath + '/observables',
-                          schemaPath: '#/properties/observables/enum',
-                          keyword: 'enum',
-                          params: { allowedValues: schema32.properties.observables.enum },
-                          message: 'must be equal to one of the allowed values',
-                          schema: schema32.properties.observables.enum,
-                          parentSchema: schema32.properties.observables,
-                          data: data4,
-                        },
-                      ];
-                      return false;
+                    if (errors === _errs10) {
+                      if (data4 && typeof data4 == 'object' && !Array.isArray(data4)) {
+                        let missing1;
+                        if (
+                          (data4.x === undefined && (missing1 = 'x')) ||
+                          (data4.y === undefined && (missing1 = 'y')) ||
+                          (data4.z === undefined && (missing1 = 'z'))
+                        ) {
+                          validate37.errors = [
+                            {
+                              instancePath: instancePath + '/leverArm',
+                              schemaPath: '#/properties/leverArm/required',
+                              keyword: 'required',
+                              params: { missingProperty: missing1 },
+                              message: "must have required property '" + missing1 + "'",
+                              schema: schema32.properties.leverArm.required,
+                              parentSchema: schema32.properties.leverArm,
+                              data: data4,
+                            },
+                          ];
+                          return false;
+                        } else {
+                          const _errs12 = errors;
+                          for (const key1 in data4) {
+                            if (!(key1 === 'x' || key1 === 'y' || key1 === 'z')) {
+                              validate37.errors = [
+                                {
+                                  instancePath: instancePath + '/leverArm',
+                                  schemaPath: '#/properties/leverArm/additionalProperties',
+                                  keyword: 'additionalProperties',
+                                  params: { additionalProperty: key1 },
+                                  message: 'must NOT have additional properties',
+                                  schema: false,
+                                  parentSchema: schema32.properties.leverArm,
+                                  data: data4,
+                                },
+                              ];
+                              return false;
+                              break;
+                            }
+                          }
+                          if (_errs12 === errors) {
+                            if (data4.x !== undefined) {
+                              const _errs13 = errors;
+                              if (
+                                !validate12(data4.x, {
+                                  instancePath: instancePath + '/leverArm/x',
+                                  parentData: data4,
+                                  parentDataProperty: 'x',
+                                  rootData,
+                                })
+                              ) {
+                                vErrors = vErrors === null ? validate12.errors : vErrors.concat(validate12.errors);
+                                errors = vErrors.length;
+                              }
+                              var valid3 = _errs13 === errors;
+                            } else {
+                              var valid3 = true;
+                            }
+                            if (valid3) {
+                              if (data4.y !== undefined) {
+                                const _errs14 = errors;
+                                if (
+                                  !validate12(data4.y, {
+                                    instancePath: instancePath + '/leverArm/y',
+                                    parentData: data4,
+                                    parentDataProperty: 'y',
+                                    rootData,
+                                  })
+                                ) {
+                                  vErrors = vErrors === null ? validate12.errors : vErrors.concat(validate12.errors);
+                                  errors = vErrors.length;
+                                }
+                                var valid3 = _errs14 === errors;
+                              } else {
+                                var valid3 = true;
+                              }
+                              if (valid3) {
+                                if (data4.z !== undefined) {
+                                  const _errs15 = errors;
+                                  if (
+                                    !validate12(data4.z, {
+                                      instancePath: instancePath + '/leverArm/z',
+                                      parentData: data4,
+                                      parentDataProperty: 'z',
+                                      rootData,
+                                    })
+                                  ) {
+                                    vErrors = vErrors === null ? validate12.errors : vErrors.concat(validate12.errors);
+                                    errors = vErrors.length;
+                                  }
+                                  var valid3 = _errs15 === errors;
+                                } else {
+                                  var valid3 = true;
+                                }
+                              }
+                            }
+                          }
+                        }
+                      } else {
+                        validate37.errors = [
+                          {
+                            instancePath: instancePath + '/leverArm',
+                            schemaPath: '#/properties/leverArm/type',
+                            keyword: 'type',
+                            params: { type: 'object' },
+                            message: 'must be object',
+                            schema: schema32.properties.leverArm.type,
+                            parentSchema: schema32.properties.leverArm,
+                            data: data4,
+                          },
+                        ];
+                        return false;
+                      }
                     }
                     var valid0 = _errs10 === errors;
                   } else {
                     var valid0 = true;
                   }
                   if (valid0) {
-                    if (data.maxRange !== undefined) {
-                      const _errs11 = errors;
-                      if (
-                        !validate12(data.maxRange, {
-                          instancePath: instancePath + '/maxRange',
-                          parentData: data,
-                          parentDataProperty: 'maxRange',
-                          rootData,
-                        })
-                      ) {
-                        vErrors = vErrors === null ? validate12.errors : vErrors.concat(validate12.errors);
-                        errors = vErrors.length;
+                    if (data.observables !== undefined) {
+                      let data8 = data.observables;
+                      const _errs16 = errors;
+                      if (!(data8 === 'range' || data8 === 'bearing' || data8 === 'range-bearing')) {
+                        validate37.errors = [
+                          {
+                            instancePath: instancePath + '/observables',
+                            schemaPath: '#/properties/observables/enum',
+                            keyword: 'enum',
+                            params: { allowedValues: schema32.properties.observables.enum },
+                            message: 'must be equal to one of the allowed values',
+                            schema: schema32.properties.observables.enum,
+                            parentSchema: schema32.properties.observables,
+                            data: data8,
+                          },
+                        ];
+                        return false;
                       }
-                      var valid0 = _errs11 === errors;
+                      var valid0 = _errs16 === errors;
                     } else {
                       var valid0 = true;
                     }
                     if (valid0) {
-                      if (data.fieldOfView !== undefined) {
-                        const _errs12 = errors;
+                      if (data.maxRange !== undefined) {
+                        const _errs17 = errors;
                         if (
-                          !validate12(data.fieldOfView, {
-                            instancePath: instancePath + '/fieldOfView',
+                          !validate12(data.maxRange, {
+                            instancePath: instancePath + '/maxRange',
                             parentData: data,
-                            parentDataProperty: 'fieldOfView',
+                            parentDataProperty: 'maxRange',
                             rootData,
                           })
                         ) {
                           vErrors = vErrors === null ? validate12.errors : vErrors.concat(validate12.errors);
                           errors = vErrors.length;
                         }
-                        var valid0 = _errs12 === errors;
+                        var valid0 = _errs17 === errors;
                       } else {
                         var valid0 = true;
                       }
                       if (valid0) {
-                        if (data.landmarks !== undefined) {
-                          let data7 = data.landmarks;
-                          const _errs13 = errors;
-                          if (errors === _errs13) {
-                            if (Array.isArray(data7)) {
-                              if (data7.length > 500) {
-                                validate31.errors = [
-                                  {
-                                    instancePath: instancePath + '/landmarks',
-                                    schemaPath: '#/properties/landmarks/maxItems',
-                                    keyword: 'maxItems',
-                                    params: { limit: 500 },
-                                    message: 'must NOT have more than 500 items',
-                                    schema: 500,
-                                    parentSchema: schema32.properties.landmarks,
-                                    data: data7,
-                                  },
-                                ];
-                                return false;
-                              } else {
-                                var valid3 = true;
-                                const len0 = data7.length;
-                                for (let i0 = 0; i0 < len0; i0++) {
-                                  const _errs15 = errors;
-                                  if (
-                                    !validate35(data7[i0], {
-                                      instancePath: instancePath + '/landmarks/' + i0,
-                                      parentData: data7,
-                                      parentDataProperty: i0,
-                                      rootData,
-                                    })
-                                  ) {
-                                    vErrors = vErrors === null ? validate35.errors : vErrors.concat(validate35.errors);
-                                    errors = vErrors.length;
-                                  }
-                                  var valid3 = _errs15 === errors;
-                                  if (!valid3) {
-                                    break;
-                                  }
-                                }
-                              }
-                            } else {
-                              validate31.errors = [
-                                {
-                                  instancePath: instancePath + '/landmarks',
-                                  schemaPath: '#/properties/landmarks/type',
-                                  keyword: 'type',
-                                  params: { type: 'array' },
-                                  message: 'must be array',
-                                  schema: schema32.properties.landmarks.type,
-                                  parentSchema: schema32.properties.landmarks,
-                                  data: data7,
-                                },
-                              ];
-                              return false;
-                            }
+                        if (data.fieldOfView !== undefined) {
+                          const _errs18 = errors;
+                          if (
+                            !validate12(data.fieldOfView, {
+                              instancePath: instancePath + '/fieldOfView',
+                              parentData: data,
+                              parentDataProperty: 'fieldOfView',
+                              rootData,
+                            })
+                          ) {
+                            vErrors = vErrors === null ? validate12.errors : vErrors.concat(validate12.errors);
+                            errors = vErrors.length;
                           }
-                          var valid0 = _errs13 === errors;
+                          var valid0 = _errs18 === errors;
                         } else {
                           var valid0 = true;
                         }
                         if (valid0) {
-                          if (data.outages !== undefined) {
-                            let data9 = data.outages;
-                            const _errs16 = errors;
-                            if (errors === _errs16) {
-                              if (Array.isArray(data9)) {
-                                if (data9.length > 100) {
-                                  validate31.errors = [
+                          if (data.landmarks !== undefined) {
+                            let data11 = data.landmarks;
+                            const _errs19 = errors;
+                            if (errors === _errs19) {
+                              if (Array.isArray(data11)) {
+                                if (data11.length > 500) {
+                                  validate37.errors = [
                                     {
-                                      instancePath: instancePath + '/outages',
-                                      schemaPath: '#/properties/outages/maxItems',
+                                      instancePath: instancePath + '/landmarks',
+                                      schemaPath: '#/properties/landmarks/maxItems',
                                       keyword: 'maxItems',
-                                      params: { limit: 100 },
-                                      message: 'must NOT have more than 100 items',
-                                      schema: 100,
-                                      parentSchema: schema32.properties.outages,
-                                      data: data9,
+                                      params: { limit: 500 },
+                                      message: 'must NOT have more than 500 items',
+                                      schema: 500,
+                                      parentSchema: schema32.properties.landmarks,
+                                      data: data11,
                                     },
                                   ];
                                   return false;
                                 } else {
                                   var valid4 = true;
-                                  const len1 = data9.length;
-                                  for (let i1 = 0; i1 < len1; i1++) {
-                                    const _errs18 = errors;
+                                  const len0 = data11.length;
+                                  for (let i0 = 0; i0 < len0; i0++) {
+                                    const _errs21 = errors;
                                     if (
-                                      !validate39(data9[i1], {
-                                        instancePath: instancePath + '/outages/' + i1,
-                                        parentData: data9,
-                                        parentDataProperty: i1,
+                                      !validate44(data11[i0], {
+                                        instancePath: instancePath + '/landmarks/' + i0,
+                                        parentData: data11,
+                                        parentDataProperty: i0,
                                         rootData,
                                       })
                                     ) {
                                       vErrors =
-                                        vErrors === null ? validate39.errors : vErrors.concat(validate39.errors);
+                                        vErrors === null ? validate44.errors : vErrors.concat(validate44.errors);
                                       errors = vErrors.length;
                                     }
-                                    var valid4 = _errs18 === errors;
+                                    var valid4 = _errs21 === errors;
                                     if (!valid4) {
                                       break;
                                     }
                                   }
                                 }
                               } else {
-                                validate31.errors = [
+                                validate37.errors = [
                                   {
-                                    instancePath: instancePath + '/outages',
-                                    schemaPath: '#/properties/outages/type',
+                                    instancePath: instancePath + '/landmarks',
+                                    schemaPath: '#/properties/landmarks/type',
                                     keyword: 'type',
                                     params: { type: 'array' },
                                     message: 'must be array',
-                                    schema: schema32.properties.outages.type,
-                                    parentSchema: schema32.properties.outages,
-                                    data: data9,
+                                    schema: schema32.properties.landmarks.type,
+                                    parentSchema: schema32.properties.landmarks,
+                                    data: data11,
                                   },
                                 ];
                                 return false;
                               }
                             }
-                            var valid0 = _errs16 === errors;
+                            var valid0 = _errs19 === errors;
                           } else {
                             var valid0 = true;
                           }
                           if (valid0) {
-                            if (data.sources !== undefined) {
-                              let data11 = data.sources;
-                              const _errs19 = errors;
-                              if (errors === _errs19) {
-                                if (Array.isArray(data11)) {
-                                  if (data11.length > 64) {
-                                    validate31.errors = [
+                            if (data.outages !== undefined) {
+                              let data13 = data.outages;
+                              const _errs22 = errors;
+                              if (errors === _errs22) {
+                                if (Array.isArray(data13)) {
+                                  if (data13.length > 100) {
+                                    validate37.errors = [
                                       {
-                                        instancePath: instancePath + '/sources',
-                                        schemaPath: '#/properties/sources/maxItems',
+                                        instancePath: instancePath + '/outages',
+                                        schemaPath: '#/properties/outages/maxItems',
                                         keyword: 'maxItems',
-                                        params: { limit: 64 },
-                                        message: 'must NOT have more than 64 items',
-                                        schema: 64,
-                                        parentSchema: schema32.properties.sources,
-                                        data: data11,
+                                        params: { limit: 100 },
+                                        message: 'must NOT have more than 100 items',
+                                        schema: 100,
+                                        parentSchema: schema32.properties.outages,
+                                        data: data13,
                                       },
                                     ];
                                     return false;
                                   } else {
                                     var valid5 = true;
-                                    const len2 = data11.length;
-                                    for (let i2 = 0; i2 < len2; i2++) {
-                                      const _errs21 = errors;
+                                    const len1 = data13.length;
+                                    for (let i1 = 0; i1 < len1; i1++) {
+                                      const _errs24 = errors;
                                       if (
-                                        !validate43(data11[i2], {
-                                          instancePath: instancePath + '/sources/' + i2,
-                                          parentData: data11,
-                                          parentDataProperty: i2,
+                                        !validate48(data13[i1], {
+                                          instancePath: instancePath + '/outages/' + i1,
+                                          parentData: data13,
+                                          parentDataProperty: i1,
                                           rootData,
                                         })
                                       ) {
                                         vErrors =
-                                          vErrors === null ? validate43.errors : vErrors.concat(validate43.errors);
+                                          vErrors === null ? validate48.errors : vErrors.concat(validate48.errors);
                                         errors = vErrors.length;
                                       }
-                                      var valid5 = _errs21 === errors;
+                                      var valid5 = _errs24 === errors;
                                       if (!valid5) {
                                         break;
                                       }
                                     }
                                   }
                                 } else {
-                                  validate31.errors = [
+                                  validate37.errors = [
                                     {
-                                      instancePath: instancePath + '/sources',
-                                      schemaPath: '#/properties/sources/type',
+                                      instancePath: instancePath + '/outages',
+                                      schemaPath: '#/properties/outages/type',
                                       keyword: 'type',
                                       params: { type: 'array' },
                                       message: 'must be array',
-                                      schema: schema32.properties.sources.type,
-                                      parentSchema: schema32.properties.sources,
-                                      data: data11,
+                                      schema: schema32.properties.outages.type,
+                                      parentSchema: schema32.properties.outages,
+                                      data: data13,
                                     },
                                   ];
                                   return false;
                                 }
                               }
-                              var valid0 = _errs19 === errors;
+                              var valid0 = _errs22 === errors;
                             } else {
                               var valid0 = true;
+                            }
+                            if (valid0) {
+                              if (data.windows !== undefined) {
+                                let data15 = data.windows;
+                                const _errs25 = errors;
+                                if (errors === _errs25) {
+                                  if (Array.isArray(data15)) {
+                                    if (data15.length > 100) {
+                                      validate37.errors = [
+                                        {
+                                          instancePath: instancePath + '/windows',
+                                          schemaPath: '#/properties/windows/maxItems',
+                                          keyword: 'maxItems',
+                                          params: { limit: 100 },
+                                          message: 'must NOT have more than 100 items',
+                                          schema: 100,
+                                          parentSchema: schema32.properties.windows,
+                                          data: data15,
+                                        },
+                                      ];
+                                      return false;
+                                    } else {
+                                      var valid6 = true;
+                                      const len2 = data15.length;
+                                      for (let i2 = 0; i2 < len2; i2++) {
+                                        const _errs27 = errors;
+                                        if (
+                                          !validate48(data15[i2], {
+                                            instancePath: instancePath + '/windows/' + i2,
+                                            parentData: data15,
+                                            parentDataProperty: i2,
+                                            rootData,
+                                          })
+                                        ) {
+                                          vErrors =
+                                            vErrors === null ? validate48.errors : vErrors.concat(validate48.errors);
+                                          errors = vErrors.length;
+                                        }
+                                        var valid6 = _errs27 === errors;
+                                        if (!valid6) {
+                                          break;
+                                        }
+                                      }
+                                    }
+                                  } else {
+                                    validate37.errors = [
+                                      {
+                                        instancePath: instancePath + '/windows',
+                                        schemaPath: '#/properties/windows/type',
+                                        keyword: 'type',
+                                        params: { type: 'array' },
+                                        message: 'must be array',
+                                        schema: schema32.properties.windows.type,
+                                        parentSchema: schema32.properties.windows,
+                                        data: data15,
+                                      },
+                                    ];
+                                    return false;
+                                  }
+                                }
+                                var valid0 = _errs25 === errors;
+                              } else {
+                                var valid0 = true;
+                              }
+                              if (valid0) {
+                                if (data.sources !== undefined) {
+                                  let data17 = data.sources;
+                                  const _errs28 = errors;
+                                  if (errors === _errs28) {
+                                    if (Array.isArray(data17)) {
+                                      if (data17.length > 64) {
+                                        validate37.errors = [
+                                          {
+                                            instancePath: instancePath + '/sources',
+                                            schemaPath: '#/properties/sources/maxItems',
+                                            keyword: 'maxItems',
+                                            params: { limit: 64 },
+                                            message: 'must NOT have more than 64 items',
+                                            schema: 64,
+                                            parentSchema: schema32.properties.sources,
+                                            data: data17,
+                                          },
+                                        ];
+                                        return false;
+                                      } else {
+                                        var valid7 = true;
+                                        const len3 = data17.length;
+                                        for (let i3 = 0; i3 < len3; i3++) {
+                                          const _errs30 = errors;
+                                          if (
+                                            !validate53(data17[i3], {
+                                              instancePath: instancePath + '/sources/' + i3,
+                                              parentData: data17,
+                                              parentDataProperty: i3,
+                                              rootData,
+                                            })
+                                          ) {
+                                            vErrors =
+                                              vErrors === null ? validate53.errors : vErrors.concat(validate53.errors);
+                                            errors = vErrors.length;
+                                          }
+                                          var valid7 = _errs30 === errors;
+                                          if (!valid7) {
+                                            break;
+                                          }
+                                        }
+                                      }
+                                    } else {
+                                      validate37.errors = [
+                                        {
+                                          instancePath: instancePath + '/sources',
+                                          schemaPath: '#/properties/sources/type',
+                                          keyword: 'type',
+                                          params: { type: 'array' },
+                                          message: 'must be array',
+                                          schema: schema32.properties.sources.type,
+                                          parentSchema: schema32.properties.sources,
+                                          data: data17,
+                                        },
+                                      ];
+                                      return false;
+                                    }
+                                  }
+                                  var valid0 = _errs28 === errors;
+                                } else {
+                                  var valid0 = true;
+                                }
+                              }
                             }
                           }
                         }
@@ -3858,7 +4452,7 @@ function validate31(data, { instancePath = '', parentData, parentDataProperty, r
         }
       }
     } else {
-      validate31.errors = [
+      validate37.errors = [
         {
           instancePath,
           schemaPath: '#/type',
@@ -3873,7 +4467,7 @@ function validate31(data, { instancePath = '', parentData, parentDataProperty, r
       return false;
     }
   }
-  validate31.errors = vErrors;
+  validate37.errors = vErrors;
   return errors === 0;
 }
 const schema50 = {
@@ -3885,7 +4479,27 @@ const schema50 = {
     id: { description: 'Requirement id, unique among requirements.', $ref: '#/definitions/id' },
     quantity: {
       description: 'What is constrained.',
-      enum: ['heading', 'speed', 'north', 'east', 'along-track', 'cross-track', 'horizontal'],
+      enum: [
+        'heading',
+        'speed',
+        'north',
+        'east',
+        'along-track',
+        'cross-track',
+        'horizontal',
+        'down',
+        'height',
+        'drms',
+        'mrse',
+        'along',
+        'cross',
+        'velocityNorth',
+        'velocityEast',
+        'velocityDown',
+        'roll',
+        'pitch',
+        'yaw',
+      ],
     },
     level: {
       description: 'Confidence level; for horizontal, 1sigma is DRMS, 2sigma is 2DRMS, 95% is R95 and 50% is CEP.',
@@ -3908,7 +4522,7 @@ const schema50 = {
     note: { description: 'Free text: where the requirement comes from.', $ref: '#/definitions/note' },
   },
 };
-function validate52(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
+function validate63(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
   let vErrors = null;
   let errors = 0;
   if (errors === 0) {
@@ -3920,7 +4534,7 @@ function validate52(data, { instancePath = '', parentData, parentDataProperty, r
         (data.level === undefined && (missing0 = 'level')) ||
         (data.limit === undefined && (missing0 = 'limit'))
       ) {
-        validate52.errors = [
+        validate63.errors = [
           {
             instancePath,
             schemaPath: '#/required',
@@ -3944,7 +4558,7 @@ function validate52(data, { instancePath = '', parentData, parentDataProperty, r
             key0 === 'window' ||
             key0 === 'note'
           )) {
-            validate52.errors = [
+            validate63.errors = [
               {
                 instancePath,
                 schemaPath: '#/additionalProperties',
@@ -3968,7 +4582,7 @@ function validate52(data, { instancePath = '', parentData, parentDataProperty, r
             if (errors === _errs3) {
               if (typeof data0 === 'string') {
                 if (!pattern4.test(data0)) {
-                  validate52.errors = [
+                  validate63.errors = [
                     {
                       instancePath: instancePath + '/id',
                       schemaPath: '#/definitions/id/pattern',
@@ -3983,7 +4597,7 @@ function validate52(data, { instancePath = '', parentData, parentDataProperty, r
                   return false;
                 }
               } else {
-                validate52.errors = [
+                validate63.errors = [
                   {
                     instancePath: instancePath + '/id',
                     schemaPath: '#/definitions/id/type',
@@ -4013,9 +4627,21 @@ function validate52(data, { instancePath = '', parentData, parentDataProperty, r
                 data1 === 'east' ||
                 data1 === 'along-track' ||
                 data1 === 'cross-track' ||
-                data1 === 'horizontal'
+                data1 === 'horizontal' ||
+                data1 === 'down' ||
+                data1 === 'height' ||
+                data1 === 'drms' ||
+                data1 === 'mrse' ||
+                data1 === 'along' ||
+                data1 === 'cross' ||
+                data1 === 'velocityNorth' ||
+                data1 === 'velocityEast' ||
+                data1 === 'velocityDown' ||
+                data1 === 'roll' ||
+                data1 === 'pitch' ||
+                data1 === 'yaw'
               )) {
-                validate52.errors = [
+                validate63.errors = [
                   {
                     instancePath: instancePath + '/quantity',
                     schemaPath: '#/properties/quantity/enum',
@@ -4038,7 +4664,7 @@ function validate52(data, { instancePath = '', parentData, parentDataProperty, r
                 let data2 = data.level;
                 const _errs6 = errors;
                 if (!(data2 === '1sigma' || data2 === '2sigma' || data2 === '95%' || data2 === '50%')) {
-                  validate52.errors = [
+                  validate63.errors = [
                     {
                       instancePath: instancePath + '/level',
                       schemaPath: '#/properties/level/enum',
@@ -4085,7 +4711,7 @@ function validate52(data, { instancePath = '', parentData, parentDataProperty, r
                           (data4.start === undefined && (missing1 = 'start')) ||
                           (data4.end === undefined && (missing1 = 'end'))
                         ) {
-                          validate52.errors = [
+                          validate63.errors = [
                             {
                               instancePath: instancePath + '/window',
                               schemaPath: '#/properties/window/required',
@@ -4102,7 +4728,7 @@ function validate52(data, { instancePath = '', parentData, parentDataProperty, r
                           const _errs10 = errors;
                           for (const key1 in data4) {
                             if (!(key1 === 'start' || key1 === 'end')) {
-                              validate52.errors = [
+                              validate63.errors = [
                                 {
                                   instancePath: instancePath + '/window',
                                   schemaPath: '#/properties/window/additionalProperties',
@@ -4158,7 +4784,7 @@ function validate52(data, { instancePath = '', parentData, parentDataProperty, r
                           }
                         }
                       } else {
-                        validate52.errors = [
+                        validate63.errors = [
                           {
                             instancePath: instancePath + '/window',
                             schemaPath: '#/properties/window/type',
@@ -4185,7 +4811,7 @@ function validate52(data, { instancePath = '', parentData, parentDataProperty, r
                       if (errors === _errs14) {
                         if (typeof data7 === 'string') {
                           if (func3(data7) > 2000) {
-                            validate52.errors = [
+                            validate63.errors = [
                               {
                                 instancePath: instancePath + '/note',
                                 schemaPath: '#/definitions/note/maxLength',
@@ -4200,7 +4826,7 @@ function validate52(data, { instancePath = '', parentData, parentDataProperty, r
                             return false;
                           }
                         } else {
-                          validate52.errors = [
+                          validate63.errors = [
                             {
                               instancePath: instancePath + '/note',
                               schemaPath: '#/definitions/note/type',
@@ -4227,7 +4853,7 @@ function validate52(data, { instancePath = '', parentData, parentDataProperty, r
         }
       }
     } else {
-      validate52.errors = [
+      validate63.errors = [
         {
           instancePath,
           schemaPath: '#/type',
@@ -4242,7 +4868,7 @@ function validate52(data, { instancePath = '', parentData, parentDataProperty, r
       return false;
     }
   }
-  validate52.errors = vErrors;
+  validate63.errors = vErrors;
   return errors === 0;
 }
 const schema53 = {
@@ -4256,14 +4882,14 @@ const schema53 = {
     note: { description: 'Free text: why this moment matters.', $ref: '#/definitions/note' },
   },
 };
-function validate57(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
+function validate68(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
   let vErrors = null;
   let errors = 0;
   if (errors === 0) {
     if (data && typeof data == 'object' && !Array.isArray(data)) {
       let missing0;
       if ((data.id === undefined && (missing0 = 'id')) || (data.time === undefined && (missing0 = 'time'))) {
-        validate57.errors = [
+        validate68.errors = [
           {
             instancePath,
             schemaPath: '#/required',
@@ -4280,7 +4906,7 @@ function validate57(data, { instancePath = '', parentData, parentDataProperty, r
         const _errs1 = errors;
         for (const key0 in data) {
           if (!(key0 === 'id' || key0 === 'time' || key0 === 'note')) {
-            validate57.errors = [
+            validate68.errors = [
               {
                 instancePath,
                 schemaPath: '#/additionalProperties',
@@ -4304,7 +4930,7 @@ function validate57(data, { instancePath = '', parentData, parentDataProperty, r
             if (errors === _errs3) {
               if (typeof data0 === 'string') {
                 if (!pattern4.test(data0)) {
-                  validate57.errors = [
+                  validate68.errors = [
                     {
                       instancePath: instancePath + '/id',
                       schemaPath: '#/definitions/id/pattern',
@@ -4319,7 +4945,7 @@ function validate57(data, { instancePath = '', parentData, parentDataProperty, r
                   return false;
                 }
               } else {
-                validate57.errors = [
+                validate68.errors = [
                   {
                     instancePath: instancePath + '/id',
                     schemaPath: '#/definitions/id/type',
@@ -4364,7 +4990,7 @@ function validate57(data, { instancePath = '', parentData, parentDataProperty, r
                 if (errors === _errs7) {
                   if (typeof data2 === 'string') {
                     if (func3(data2) > 2000) {
-                      validate57.errors = [
+                      validate68.errors = [
                         {
                           instancePath: instancePath + '/note',
                           schemaPath: '#/definitions/note/maxLength',
@@ -4379,7 +5005,7 @@ function validate57(data, { instancePath = '', parentData, parentDataProperty, r
                       return false;
                     }
                   } else {
-                    validate57.errors = [
+                    validate68.errors = [
                       {
                         instancePath: instancePath + '/note',
                         schemaPath: '#/definitions/note/type',
@@ -4403,7 +5029,7 @@ function validate57(data, { instancePath = '', parentData, parentDataProperty, r
         }
       }
     } else {
-      validate57.errors = [
+      validate68.errors = [
         {
           instancePath,
           schemaPath: '#/type',
@@ -4418,7 +5044,7 @@ function validate57(data, { instancePath = '', parentData, parentDataProperty, r
       return false;
     }
   }
-  validate57.errors = vErrors;
+  validate68.errors = vErrors;
   return errors === 0;
 }
 const schema56 = {
@@ -4439,7 +5065,7 @@ const schema56 = {
   },
 };
 const pattern13 = new RegExp('^[^.]+\\.[^.]+$', 'u');
-function validate60(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
+function validate71(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
   let vErrors = null;
   let errors = 0;
   if (errors === 0) {
@@ -4449,7 +5075,7 @@ function validate60(data, { instancePath = '', parentData, parentDataProperty, r
         (data.requirement === undefined && (missing0 = 'requirement')) ||
         (data.vary === undefined && (missing0 = 'vary'))
       ) {
-        validate60.errors = [
+        validate71.errors = [
           {
             instancePath,
             schemaPath: '#/required',
@@ -4466,7 +5092,7 @@ function validate60(data, { instancePath = '', parentData, parentDataProperty, r
         const _errs1 = errors;
         for (const key0 in data) {
           if (!(key0 === 'requirement' || key0 === 'vary' || key0 === 'note')) {
-            validate60.errors = [
+            validate71.errors = [
               {
                 instancePath,
                 schemaPath: '#/additionalProperties',
@@ -4490,7 +5116,7 @@ function validate60(data, { instancePath = '', parentData, parentDataProperty, r
             if (errors === _errs3) {
               if (typeof data0 === 'string') {
                 if (!pattern4.test(data0)) {
-                  validate60.errors = [
+                  validate71.errors = [
                     {
                       instancePath: instancePath + '/requirement',
                       schemaPath: '#/definitions/id/pattern',
@@ -4505,7 +5131,7 @@ function validate60(data, { instancePath = '', parentData, parentDataProperty, r
                   return false;
                 }
               } else {
-                validate60.errors = [
+                validate71.errors = [
                   {
                     instancePath: instancePath + '/requirement',
                     schemaPath: '#/definitions/id/type',
@@ -4531,7 +5157,7 @@ function validate60(data, { instancePath = '', parentData, parentDataProperty, r
               if (errors === _errs5) {
                 if (typeof data1 === 'string') {
                   if (func3(data1) > 130) {
-                    validate60.errors = [
+                    validate71.errors = [
                       {
                         instancePath: instancePath + '/vary',
                         schemaPath: '#/properties/vary/maxLength',
@@ -4546,7 +5172,7 @@ function validate60(data, { instancePath = '', parentData, parentDataProperty, r
                     return false;
                   } else {
                     if (!pattern13.test(data1)) {
-                      validate60.errors = [
+                      validate71.errors = [
                         {
                           instancePath: instancePath + '/vary',
                           schemaPath: '#/properties/vary/pattern',
@@ -4562,7 +5188,7 @@ function validate60(data, { instancePath = '', parentData, parentDataProperty, r
                     }
                   }
                 } else {
-                  validate60.errors = [
+                  validate71.errors = [
                     {
                       instancePath: instancePath + '/vary',
                       schemaPath: '#/properties/vary/type',
@@ -4589,7 +5215,7 @@ function validate60(data, { instancePath = '', parentData, parentDataProperty, r
                 if (errors === _errs8) {
                   if (typeof data2 === 'string') {
                     if (func3(data2) > 2000) {
-                      validate60.errors = [
+                      validate71.errors = [
                         {
                           instancePath: instancePath + '/note',
                           schemaPath: '#/definitions/note/maxLength',
@@ -4604,7 +5230,7 @@ function validate60(data, { instancePath = '', parentData, parentDataProperty, r
                       return false;
                     }
                   } else {
-                    validate60.errors = [
+                    validate71.errors = [
                       {
                         instancePath: instancePath + '/note',
                         schemaPath: '#/definitions/note/type',
@@ -4628,7 +5254,7 @@ function validate60(data, { instancePath = '', parentData, parentDataProperty, r
         }
       }
     } else {
-      validate60.errors = [
+      validate71.errors = [
         {
           instancePath,
           schemaPath: '#/type',
@@ -4643,7 +5269,7 @@ function validate60(data, { instancePath = '', parentData, parentDataProperty, r
       return false;
     }
   }
-  validate60.errors = vErrors;
+  validate71.errors = vErrors;
   return errors === 0;
 }
 const pattern1 = new RegExp('^[A-Za-z_][A-Za-z0-9_]{0,63}$', 'u');
@@ -4762,15 +5388,15 @@ function validate10(data, { instancePath = '', parentData, parentDataProperty, r
               if (data.formatVersion !== undefined) {
                 let data2 = data.formatVersion;
                 const _errs5 = errors;
-                if (1 !== data2) {
+                if (2 !== data2) {
                   validate10.errors = [
                     {
                       instancePath: instancePath + '/formatVersion',
                       schemaPath: '#/properties/formatVersion/const',
                       keyword: 'const',
-                      params: { allowedValue: 1 },
+                      params: { allowedValue: 2 },
                       message: 'must be equal to constant',
-                      schema: 1,
+                      schema: 2,
                       parentSchema: schema11.properties.formatVersion,
                       data: data2,
                     },
@@ -4782,411 +5408,372 @@ function validate10(data, { instancePath = '', parentData, parentDataProperty, r
                 var valid0 = true;
               }
               if (valid0) {
-                if (data.title !== undefined) {
-                  let data3 = data.title;
+                if (data.model !== undefined) {
+                  let data3 = data.model;
                   const _errs6 = errors;
-                  if (errors === _errs6) {
-                    if (typeof data3 === 'string') {
-                      if (func3(data3) > 200) {
-                        validate10.errors = [
-                          {
-                            instancePath: instancePath + '/title',
-                            schemaPath: '#/properties/title/maxLength',
-                            keyword: 'maxLength',
-                            params: { limit: 200 },
-                            message: 'must NOT have more than 200 characters',
-                            schema: 200,
-                            parentSchema: schema11.properties.title,
-                            data: data3,
-                          },
-                        ];
-                        return false;
-                      } else {
-                        if (func3(data3) < 1) {
-                          validate10.errors = [
-                            {
-                              instancePath: instancePath + '/title',
-                              schemaPath: '#/properties/title/minLength',
-                              keyword: 'minLength',
-                              params: { limit: 1 },
-                              message: 'must NOT have fewer than 1 characters',
-                              schema: 1,
-                              parentSchema: schema11.properties.title,
-                              data: data3,
-                            },
-                          ];
-                          return false;
-                        }
-                      }
-                    } else {
-                      validate10.errors = [
-                        {
-                          instancePath: instancePath + '/title',
-                          schemaPath: '#/properties/title/type',
-                          keyword: 'type',
-                          params: { type: 'string' },
-                          message: 'must be string',
-                          schema: schema11.properties.title.type,
-                          parentSchema: schema11.properties.title,
-                          data: data3,
-                        },
-                      ];
-                      return false;
-                    }
+                  if (!(data3 === 'planar' || data3 === 'inertial')) {
+                    validate10.errors = [
+                      {
+                        instancePath: instancePath + '/model',
+                        schemaPath: '#/properties/model/enum',
+                        keyword: 'enum',
+                        params: { allowedValues: schema11.properties.model.enum },
+                        message: 'must be equal to one of the allowed values',
+                        schema: schema11.properties.model.enum,
+                        parentSchema: schema11.properties.model,
+                        data: data3,
+                      },
+                    ];
+                    return false;
                   }
                   var valid0 = _errs6 === errors;
                 } else {
                   var valid0 = true;
                 }
                 if (valid0) {
-                  if (data.description !== undefined) {
-                    let data4 = data.description;
-                    const _errs8 = errors;
-                    if (errors === _errs8) {
+                  if (data.title !== undefined) {
+                    let data4 = data.title;
+                    const _errs7 = errors;
+                    if (errors === _errs7) {
                       if (typeof data4 === 'string') {
-                        if (func3(data4) > 20000) {
+                        if (func3(data4) > 200) {
                           validate10.errors = [
                             {
-                              instancePath: instancePath + '/description',
-                              schemaPath: '#/properties/description/maxLength',
+                              instancePath: instancePath + '/title',
+                              schemaPath: '#/properties/title/maxLength',
                               keyword: 'maxLength',
-                              params: { limit: 20000 },
-                              message: 'must NOT have more than 20000 characters',
-                              schema: 20000,
-                              parentSchema: schema11.properties.description,
+                              params: { limit: 200 },
+                              message: 'must NOT have more than 200 characters',
+                              schema: 200,
+                              parentSchema: schema11.properties.title,
                               data: data4,
                             },
                           ];
                           return false;
+                        } else {
+                          if (func3(data4) < 1) {
+                            validate10.errors = [
+                              {
+                                instancePath: instancePath + '/title',
+                                schemaPath: '#/properties/title/minLength',
+                                keyword: 'minLength',
+                                params: { limit: 1 },
+                                message: 'must NOT have fewer than 1 characters',
+                                schema: 1,
+                                parentSchema: schema11.properties.title,
+                                data: data4,
+                              },
+                            ];
+                            return false;
+                          }
                         }
                       } else {
                         validate10.errors = [
                           {
-                            instancePath: instancePath + '/description',
-                            schemaPath: '#/properties/description/type',
+                            instancePath: instancePath + '/title',
+                            schemaPath: '#/properties/title/type',
                             keyword: 'type',
                             params: { type: 'string' },
                             message: 'must be string',
-                            schema: schema11.properties.description.type,
-                            parentSchema: schema11.properties.description,
+                            schema: schema11.properties.title.type,
+                            parentSchema: schema11.properties.title,
                             data: data4,
                           },
                         ];
                         return false;
                       }
                     }
-                    var valid0 = _errs8 === errors;
+                    var valid0 = _errs7 === errors;
                   } else {
                     var valid0 = true;
                   }
                   if (valid0) {
-                    if (data.settings !== undefined) {
-                      const _errs10 = errors;
-                      if (
-                        !validate11(data.settings, {
-                          instancePath: instancePath + '/settings',
-                          parentData: data,
-                          parentDataProperty: 'settings',
-                          rootData,
-                        })
-                      ) {
-                        vErrors = vErrors === null ? validate11.errors : vErrors.concat(validate11.errors);
-                        errors = vErrors.length;
-                      }
-                      var valid0 = _errs10 === errors;
-                    } else {
-                      var valid0 = true;
-                    }
-                    if (valid0) {
-                      if (data.values !== undefined) {
-                        let data6 = data.values;
-                        const _errs11 = errors;
-                        if (errors === _errs11) {
-                          if (data6 && typeof data6 == 'object' && !Array.isArray(data6)) {
-                            if (Object.keys(data6).length > 500) {
-                              validate10.errors = [
-                                {
-                                  instancePath: instancePath + '/values',
-                                  schemaPath: '#/properties/values/maxProperties',
-                                  keyword: 'maxProperties',
-                                  params: { limit: 500 },
-                                  message: 'must NOT have more than 500 properties',
-                                  schema: 500,
-                                  parentSchema: schema11.properties.values,
-                                  data: data6,
-                                },
-                              ];
-                              return false;
-                            } else {
-                              for (const key1 in data6) {
-                                const _errs13 = errors;
-                                const _errs14 = errors;
-                                const _errs16 = errors;
-                                const _errs17 = errors;
-                                if (!(key1 === '__proto__' || key1 === 'constructor' || key1 === 'prototype')) {
-                                  const err0 = {};
-                                  if (vErrors === null) {
-                                    vErrors = [err0];
-                                  } else {
-                                    vErrors.push(err0);
-                                  }
-                                  errors++;
-                                }
-                                var valid3 = _errs17 === errors;
-                                if (valid3) {
-                                  const err1 = {
-                                    instancePath: instancePath + '/values',
-                                    schemaPath: '#/definitions/valueName/not',
-                                    keyword: 'not',
-                                    params: {},
-                                    message: 'must NOT be valid',
-                                    schema: schema16.not,
-                                    parentSchema: schema16,
-                                    data: key1,
-                                    propertyName: key1,
-                                  };
-                                  if (vErrors === null) {
-                                    vErrors = [err1];
-                                  } else {
-                                    vErrors.push(err1);
-                                  }
-                                  errors++;
-                                } else {
-                                  errors = _errs16;
-                                  if (vErrors !== null) {
-                                    if (_errs16) {
-                                      vErrors.length = _errs16;
-                                    } else {
-                                      vErrors = null;
-                                    }
-                                  }
-                                }
-                                if (errors === _errs14) {
-                                  if (typeof key1 === 'string') {
-                                    if (!pattern1.test(key1)) {
-                                      const err2 = {
-                                        instancePath: instancePath + '/values',
-                                        schemaPath: '#/definitions/valueName/pattern',
-                                        keyword: 'pattern',
-                                        params: { pattern: '^[A-Za-z_][A-Za-z0-9_]{0,63}$' },
-                                        message: 'must match pattern "' + '^[A-Za-z_][A-Za-z0-9_]{0,63}$' + '"',
-                                        schema: '^[A-Za-z_][A-Za-z0-9_]{0,63}$',
-                                        parentSchema: schema16,
-                                        data: key1,
-                                        propertyName: key1,
-                                      };
-                                      if (vErrors === null) {
-                                        vErrors = [err2];
-                                      } else {
-                                        vErrors.push(err2);
-                                      }
-                                      errors++;
-                                    }
-                                  } else {
-                                    const err3 = {
-                                      instancePath: instancePath + '/values',
-                                      schemaPath: '#/definitions/valueName/type',
-                                      keyword: 'type',
-                                      params: { type: 'string' },
-                                      message: 'must be string',
-                                      schema: schema16.type,
-                                      parentSchema: schema16,
-                                      data: key1,
-                                      propertyName: key1,
-                                    };
-                                    if (vErrors === null) {
-                                      vErrors = [err3];
-                                    } else {
-                                      vErrors.push(err3);
-                                    }
-                                    errors++;
-                                  }
-                                }
-                                var valid1 = _errs13 === errors;
-                                if (!valid1) {
-                                  const err4 = {
-                                    instancePath: instancePath + '/values',
-                                    schemaPath: '#/properties/values/propertyNames',
-                                    keyword: 'propertyNames',
-                                    params: { propertyName: key1 },
-                                    message: 'property name must be valid',
-                                    schema: schema11.properties.values.propertyNames,
-                                    parentSchema: schema11.properties.values,
-                                    data: data6,
-                                  };
-                                  if (vErrors === null) {
-                                    vErrors = [err4];
-                                  } else {
-                                    vErrors.push(err4);
-                                  }
-                                  errors++;
-                                  validate10.errors = vErrors;
-                                  return false;
-                                  break;
-                                }
-                              }
-                              if (valid1) {
-                                for (const key2 in data6) {
-                                  const _errs19 = errors;
-                                  if (
-                                    !validate15(data6[key2], {
-                                      instancePath:
-                                        instancePath + '/values/' + key2.replace(/~/g, '~0').replace(/\//g, '~1'),
-                                      parentData: data6,
-                                      parentDataProperty: key2,
-                                      rootData,
-                                    })
-                                  ) {
-                                    vErrors = vErrors === null ? validate15.errors : vErrors.concat(validate15.errors);
-                                    errors = vErrors.length;
-                                  }
-                                  var valid4 = _errs19 === errors;
-                                  if (!valid4) {
-                                    break;
-                                  }
-                                }
-                              }
-                            }
-                          } else {
+                    if (data.description !== undefined) {
+                      let data5 = data.description;
+                      const _errs9 = errors;
+                      if (errors === _errs9) {
+                        if (typeof data5 === 'string') {
+                          if (func3(data5) > 20000) {
                             validate10.errors = [
                               {
-                                instancePath: instancePath + '/values',
-                                schemaPath: '#/properties/values/type',
-                                keyword: 'type',
-                                params: { type: 'object' },
-                                message: 'must be object',
-                                schema: schema11.properties.values.type,
-                                parentSchema: schema11.properties.values,
-                                data: data6,
+                                instancePath: instancePath + '/description',
+                                schemaPath: '#/properties/description/maxLength',
+                                keyword: 'maxLength',
+                                params: { limit: 20000 },
+                                message: 'must NOT have more than 20000 characters',
+                                schema: 20000,
+                                parentSchema: schema11.properties.description,
+                                data: data5,
                               },
                             ];
                             return false;
                           }
+                        } else {
+                          validate10.errors = [
+                            {
+                              instancePath: instancePath + '/description',
+                              schemaPath: '#/properties/description/type',
+                              keyword: 'type',
+                              params: { type: 'string' },
+                              message: 'must be string',
+                              schema: schema11.properties.description.type,
+                              parentSchema: schema11.properties.description,
+                              data: data5,
+                            },
+                          ];
+                          return false;
+                        }
+                      }
+                      var valid0 = _errs9 === errors;
+                    } else {
+                      var valid0 = true;
+                    }
+                    if (valid0) {
+                      if (data.settings !== undefined) {
+                        const _errs11 = errors;
+                        if (
+                          !validate11(data.settings, {
+                            instancePath: instancePath + '/settings',
+                            parentData: data,
+                            parentDataProperty: 'settings',
+                            rootData,
+                          })
+                        ) {
+                          vErrors = vErrors === null ? validate11.errors : vErrors.concat(validate11.errors);
+                          errors = vErrors.length;
                         }
                         var valid0 = _errs11 === errors;
                       } else {
                         var valid0 = true;
                       }
                       if (valid0) {
-                        if (data.mission !== undefined) {
-                          const _errs20 = errors;
-                          if (
-                            !validate17(data.mission, {
-                              instancePath: instancePath + '/mission',
-                              parentData: data,
-                              parentDataProperty: 'mission',
-                              rootData,
-                            })
-                          ) {
-                            vErrors = vErrors === null ? validate17.errors : vErrors.concat(validate17.errors);
-                            errors = vErrors.length;
-                          }
-                          var valid0 = _errs20 === errors;
-                        } else {
-                          var valid0 = true;
-                        }
-                        if (valid0) {
-                          if (data.sensors !== undefined) {
-                            let data9 = data.sensors;
-                            const _errs21 = errors;
-                            if (errors === _errs21) {
-                              if (Array.isArray(data9)) {
-                                if (data9.length > 32) {
-                                  validate10.errors = [
-                                    {
-                                      instancePath: instancePath + '/sensors',
-                                      schemaPath: '#/properties/sensors/maxItems',
-                                      keyword: 'maxItems',
-                                      params: { limit: 32 },
-                                      message: 'must NOT have more than 32 items',
-                                      schema: 32,
-                                      parentSchema: schema11.properties.sensors,
-                                      data: data9,
-                                    },
-                                  ];
-                                  return false;
-                                } else {
-                                  var valid5 = true;
-                                  const len0 = data9.length;
-                                  for (let i0 = 0; i0 < len0; i0++) {
-                                    const _errs23 = errors;
+                        if (data.values !== undefined) {
+                          let data7 = data.values;
+                          const _errs12 = errors;
+                          if (errors === _errs12) {
+                            if (data7 && typeof data7 == 'object' && !Array.isArray(data7)) {
+                              if (Object.keys(data7).length > 500) {
+                                validate10.errors = [
+                                  {
+                                    instancePath: instancePath + '/values',
+                                    schemaPath: '#/properties/values/maxProperties',
+                                    keyword: 'maxProperties',
+                                    params: { limit: 500 },
+                                    message: 'must NOT have more than 500 properties',
+                                    schema: 500,
+                                    parentSchema: schema11.properties.values,
+                                    data: data7,
+                                  },
+                                ];
+                                return false;
+                              } else {
+                                for (const key1 in data7) {
+                                  const _errs14 = errors;
+                                  const _errs15 = errors;
+                                  const _errs17 = errors;
+                                  const _errs18 = errors;
+                                  if (!(key1 === '__proto__' || key1 === 'constructor' || key1 === 'prototype')) {
+                                    const err0 = {};
+                                    if (vErrors === null) {
+                                      vErrors = [err0];
+                                    } else {
+                                      vErrors.push(err0);
+                                    }
+                                    errors++;
+                                  }
+                                  var valid3 = _errs18 === errors;
+                                  if (valid3) {
+                                    const err1 = {
+                                      instancePath: instancePath + '/values',
+                                      schemaPath: '#/definitions/valueName/not',
+                                      keyword: 'not',
+                                      params: {},
+                                      message: 'must NOT be valid',
+                                      schema: schema16.not,
+                                      parentSchema: schema16,
+                                      data: key1,
+                                      propertyName: key1,
+                                    };
+                                    if (vErrors === null) {
+                                      vErrors = [err1];
+                                    } else {
+                                      vErrors.push(err1);
+                                    }
+                                    errors++;
+                                  } else {
+                                    errors = _errs17;
+                                    if (vErrors !== null) {
+                                      if (_errs17) {
+                                        vErrors.length = _errs17;
+                                      } else {
+                                        vErrors = null;
+                                      }
+                                    }
+                                  }
+                                  if (errors === _errs15) {
+                                    if (typeof key1 === 'string') {
+                                      if (!pattern1.test(key1)) {
+                                        const err2 = {
+                                          instancePath: instancePath + '/values',
+                                          schemaPath: '#/definitions/valueName/pattern',
+                                          keyword: 'pattern',
+                                          params: { pattern: '^[A-Za-z_][A-Za-z0-9_]{0,63}$' },
+                                          message: 'must match pattern "' + '^[A-Za-z_][A-Za-z0-9_]{0,63}$' + '"',
+                                          schema: '^[A-Za-z_][A-Za-z0-9_]{0,63}$',
+                                          parentSchema: schema16,
+                                          data: key1,
+                                          propertyName: key1,
+                                        };
+                                        if (vErrors === null) {
+                                          vErrors = [err2];
+                                        } else {
+                                          vErrors.push(err2);
+                                        }
+                                        errors++;
+                                      }
+                                    } else {
+                                      const err3 = {
+                                        instancePath: instancePath + '/values',
+                                        schemaPath: '#/definitions/valueName/type',
+                                        keyword: 'type',
+                                        params: { type: 'string' },
+                                        message: 'must be string',
+                                        schema: schema16.type,
+                                        parentSchema: schema16,
+                                        data: key1,
+                                        propertyName: key1,
+                                      };
+                                      if (vErrors === null) {
+                                        vErrors = [err3];
+                                      } else {
+                                        vErrors.push(err3);
+                                      }
+                                      errors++;
+                                    }
+                                  }
+                                  var valid1 = _errs14 === errors;
+                                  if (!valid1) {
+                                    const err4 = {
+                                      instancePath: instancePath + '/values',
+                                      schemaPath: '#/properties/values/propertyNames',
+                                      keyword: 'propertyNames',
+                                      params: { propertyName: key1 },
+                                      message: 'property name must be valid',
+                                      schema: schema11.properties.values.propertyNames,
+                                      parentSchema: schema11.properties.values,
+                                      data: data7,
+                                    };
+                                    if (vErrors === null) {
+                                      vErrors = [err4];
+                                    } else {
+                                      vErrors.push(err4);
+                                    }
+                                    errors++;
+                                    validate10.errors = vErrors;
+                                    return false;
+                                    break;
+                                  }
+                                }
+                                if (valid1) {
+                                  for (const key2 in data7) {
+                                    const _errs20 = errors;
                                     if (
-                                      !validate31(data9[i0], {
-                                        instancePath: instancePath + '/sensors/' + i0,
-                                        parentData: data9,
-                                        parentDataProperty: i0,
+                                      !validate15(data7[key2], {
+                                        instancePath:
+                                          instancePath + '/values/' + key2.replace(/~/g, '~0').replace(/\//g, '~1'),
+                                        parentData: data7,
+                                        parentDataProperty: key2,
                                         rootData,
                                       })
                                     ) {
                                       vErrors =
-                                        vErrors === null ? validate31.errors : vErrors.concat(validate31.errors);
+                                        vErrors === null ? validate15.errors : vErrors.concat(validate15.errors);
                                       errors = vErrors.length;
                                     }
-                                    var valid5 = _errs23 === errors;
-                                    if (!valid5) {
+                                    var valid4 = _errs20 === errors;
+                                    if (!valid4) {
                                       break;
                                     }
                                   }
                                 }
-                              } else {
-                                validate10.errors = [
-                                  {
-                                    instancePath: instancePath + '/sensors',
-                                    schemaPath: '#/properties/sensors/type',
-                                    keyword: 'type',
-                                    params: { type: 'array' },
-                                    message: 'must be array',
-                                    schema: schema11.properties.sensors.type,
-                                    parentSchema: schema11.properties.sensors,
-                                    data: data9,
-                                  },
-                                ];
-                                return false;
                               }
+                            } else {
+                              validate10.errors = [
+                                {
+                                  instancePath: instancePath + '/values',
+                                  schemaPath: '#/properties/values/type',
+                                  keyword: 'type',
+                                  params: { type: 'object' },
+                                  message: 'must be object',
+                                  schema: schema11.properties.values.type,
+                                  parentSchema: schema11.properties.values,
+                                  data: data7,
+                                },
+                              ];
+                              return false;
+                            }
+                          }
+                          var valid0 = _errs12 === errors;
+                        } else {
+                          var valid0 = true;
+                        }
+                        if (valid0) {
+                          if (data.mission !== undefined) {
+                            const _errs21 = errors;
+                            if (
+                              !validate17(data.mission, {
+                                instancePath: instancePath + '/mission',
+                                parentData: data,
+                                parentDataProperty: 'mission',
+                                rootData,
+                              })
+                            ) {
+                              vErrors = vErrors === null ? validate17.errors : vErrors.concat(validate17.errors);
+                              errors = vErrors.length;
                             }
                             var valid0 = _errs21 === errors;
                           } else {
                             var valid0 = true;
                           }
                           if (valid0) {
-                            if (data.requirements !== undefined) {
-                              let data11 = data.requirements;
-                              const _errs24 = errors;
-                              if (errors === _errs24) {
-                                if (Array.isArray(data11)) {
-                                  if (data11.length > 100) {
+                            if (data.sensors !== undefined) {
+                              let data10 = data.sensors;
+                              const _errs22 = errors;
+                              if (errors === _errs22) {
+                                if (Array.isArray(data10)) {
+                                  if (data10.length > 32) {
                                     validate10.errors = [
                                       {
-                                        instancePath: instancePath + '/requirements',
-                                        schemaPath: '#/properties/requirements/maxItems',
+                                        instancePath: instancePath + '/sensors',
+                                        schemaPath: '#/properties/sensors/maxItems',
                                         keyword: 'maxItems',
-                                        params: { limit: 100 },
-                                        message: 'must NOT have more than 100 items',
-                                        schema: 100,
-                                        parentSchema: schema11.properties.requirements,
-                                        data: data11,
+                                        params: { limit: 32 },
+                                        message: 'must NOT have more than 32 items',
+                                        schema: 32,
+                                        parentSchema: schema11.properties.sensors,
+                                        data: data10,
                                       },
                                     ];
                                     return false;
                                   } else {
-                                    var valid6 = true;
-                                    const len1 = data11.length;
-                                    for (let i1 = 0; i1 < len1; i1++) {
-                                      const _errs26 = errors;
+                                    var valid5 = true;
+                                    const len0 = data10.length;
+                                    for (let i0 = 0; i0 < len0; i0++) {
+                                      const _errs24 = errors;
                                       if (
-                                        !validate52(data11[i1], {
-                                          instancePath: instancePath + '/requirements/' + i1,
-                                          parentData: data11,
-                                          parentDataProperty: i1,
+                                        !validate37(data10[i0], {
+                                          instancePath: instancePath + '/sensors/' + i0,
+                                          parentData: data10,
+                                          parentDataProperty: i0,
                                           rootData,
                                         })
                                       ) {
                                         vErrors =
-                                          vErrors === null ? validate52.errors : vErrors.concat(validate52.errors);
+                                          vErrors === null ? validate37.errors : vErrors.concat(validate37.errors);
                                         errors = vErrors.length;
                                       }
-                                      var valid6 = _errs26 === errors;
-                                      if (!valid6) {
+                                      var valid5 = _errs24 === errors;
+                                      if (!valid5) {
                                         break;
                                       }
                                     }
@@ -5194,62 +5781,62 @@ function validate10(data, { instancePath = '', parentData, parentDataProperty, r
                                 } else {
                                   validate10.errors = [
                                     {
-                                      instancePath: instancePath + '/requirements',
-                                      schemaPath: '#/properties/requirements/type',
+                                      instancePath: instancePath + '/sensors',
+                                      schemaPath: '#/properties/sensors/type',
                                       keyword: 'type',
                                       params: { type: 'array' },
                                       message: 'must be array',
-                                      schema: schema11.properties.requirements.type,
-                                      parentSchema: schema11.properties.requirements,
-                                      data: data11,
+                                      schema: schema11.properties.sensors.type,
+                                      parentSchema: schema11.properties.sensors,
+                                      data: data10,
                                     },
                                   ];
                                   return false;
                                 }
                               }
-                              var valid0 = _errs24 === errors;
+                              var valid0 = _errs22 === errors;
                             } else {
                               var valid0 = true;
                             }
                             if (valid0) {
-                              if (data.checkpoints !== undefined) {
-                                let data13 = data.checkpoints;
-                                const _errs27 = errors;
-                                if (errors === _errs27) {
-                                  if (Array.isArray(data13)) {
-                                    if (data13.length > 500) {
+                              if (data.requirements !== undefined) {
+                                let data12 = data.requirements;
+                                const _errs25 = errors;
+                                if (errors === _errs25) {
+                                  if (Array.isArray(data12)) {
+                                    if (data12.length > 100) {
                                       validate10.errors = [
                                         {
-                                          instancePath: instancePath + '/checkpoints',
-                                          schemaPath: '#/properties/checkpoints/maxItems',
+                                          instancePath: instancePath + '/requirements',
+                                          schemaPath: '#/properties/requirements/maxItems',
                                           keyword: 'maxItems',
-                                          params: { limit: 500 },
-                                          message: 'must NOT have more than 500 items',
-                                          schema: 500,
-                                          parentSchema: schema11.properties.checkpoints,
-                                          data: data13,
+                                          params: { limit: 100 },
+                                          message: 'must NOT have more than 100 items',
+                                          schema: 100,
+                                          parentSchema: schema11.properties.requirements,
+                                          data: data12,
                                         },
                                       ];
                                       return false;
                                     } else {
-                                      var valid7 = true;
-                                      const len2 = data13.length;
-                                      for (let i2 = 0; i2 < len2; i2++) {
-                                        const _errs29 = errors;
+                                      var valid6 = true;
+                                      const len1 = data12.length;
+                                      for (let i1 = 0; i1 < len1; i1++) {
+                                        const _errs27 = errors;
                                         if (
-                                          !validate57(data13[i2], {
-                                            instancePath: instancePath + '/checkpoints/' + i2,
-                                            parentData: data13,
-                                            parentDataProperty: i2,
+                                          !validate63(data12[i1], {
+                                            instancePath: instancePath + '/requirements/' + i1,
+                                            parentData: data12,
+                                            parentDataProperty: i1,
                                             rootData,
                                           })
                                         ) {
                                           vErrors =
-                                            vErrors === null ? validate57.errors : vErrors.concat(validate57.errors);
+                                            vErrors === null ? validate63.errors : vErrors.concat(validate63.errors);
                                           errors = vErrors.length;
                                         }
-                                        var valid7 = _errs29 === errors;
-                                        if (!valid7) {
+                                        var valid6 = _errs27 === errors;
+                                        if (!valid6) {
                                           break;
                                         }
                                       }
@@ -5257,62 +5844,62 @@ function validate10(data, { instancePath = '', parentData, parentDataProperty, r
                                   } else {
                                     validate10.errors = [
                                       {
-                                        instancePath: instancePath + '/checkpoints',
-                                        schemaPath: '#/properties/checkpoints/type',
+                                        instancePath: instancePath + '/requirements',
+                                        schemaPath: '#/properties/requirements/type',
                                         keyword: 'type',
                                         params: { type: 'array' },
                                         message: 'must be array',
-                                        schema: schema11.properties.checkpoints.type,
-                                        parentSchema: schema11.properties.checkpoints,
-                                        data: data13,
+                                        schema: schema11.properties.requirements.type,
+                                        parentSchema: schema11.properties.requirements,
+                                        data: data12,
                                       },
                                     ];
                                     return false;
                                   }
                                 }
-                                var valid0 = _errs27 === errors;
+                                var valid0 = _errs25 === errors;
                               } else {
                                 var valid0 = true;
                               }
                               if (valid0) {
-                                if (data.sizing !== undefined) {
-                                  let data15 = data.sizing;
-                                  const _errs30 = errors;
-                                  if (errors === _errs30) {
-                                    if (Array.isArray(data15)) {
-                                      if (data15.length > 20) {
+                                if (data.checkpoints !== undefined) {
+                                  let data14 = data.checkpoints;
+                                  const _errs28 = errors;
+                                  if (errors === _errs28) {
+                                    if (Array.isArray(data14)) {
+                                      if (data14.length > 500) {
                                         validate10.errors = [
                                           {
-                                            instancePath: instancePath + '/sizing',
-                                            schemaPath: '#/properties/sizing/maxItems',
+                                            instancePath: instancePath + '/checkpoints',
+                                            schemaPath: '#/properties/checkpoints/maxItems',
                                             keyword: 'maxItems',
-                                            params: { limit: 20 },
-                                            message: 'must NOT have more than 20 items',
-                                            schema: 20,
-                                            parentSchema: schema11.properties.sizing,
-                                            data: data15,
+                                            params: { limit: 500 },
+                                            message: 'must NOT have more than 500 items',
+                                            schema: 500,
+                                            parentSchema: schema11.properties.checkpoints,
+                                            data: data14,
                                           },
                                         ];
                                         return false;
                                       } else {
-                                        var valid8 = true;
-                                        const len3 = data15.length;
-                                        for (let i3 = 0; i3 < len3; i3++) {
-                                          const _errs32 = errors;
+                                        var valid7 = true;
+                                        const len2 = data14.length;
+                                        for (let i2 = 0; i2 < len2; i2++) {
+                                          const _errs30 = errors;
                                           if (
-                                            !validate60(data15[i3], {
-                                              instancePath: instancePath + '/sizing/' + i3,
-                                              parentData: data15,
-                                              parentDataProperty: i3,
+                                            !validate68(data14[i2], {
+                                              instancePath: instancePath + '/checkpoints/' + i2,
+                                              parentData: data14,
+                                              parentDataProperty: i2,
                                               rootData,
                                             })
                                           ) {
                                             vErrors =
-                                              vErrors === null ? validate60.errors : vErrors.concat(validate60.errors);
+                                              vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
                                             errors = vErrors.length;
                                           }
-                                          var valid8 = _errs32 === errors;
-                                          if (!valid8) {
+                                          var valid7 = _errs30 === errors;
+                                          if (!valid7) {
                                             break;
                                           }
                                         }
@@ -5320,22 +5907,88 @@ function validate10(data, { instancePath = '', parentData, parentDataProperty, r
                                     } else {
                                       validate10.errors = [
                                         {
-                                          instancePath: instancePath + '/sizing',
-                                          schemaPath: '#/properties/sizing/type',
+                                          instancePath: instancePath + '/checkpoints',
+                                          schemaPath: '#/properties/checkpoints/type',
                                           keyword: 'type',
                                           params: { type: 'array' },
                                           message: 'must be array',
-                                          schema: schema11.properties.sizing.type,
-                                          parentSchema: schema11.properties.sizing,
-                                          data: data15,
+                                          schema: schema11.properties.checkpoints.type,
+                                          parentSchema: schema11.properties.checkpoints,
+                                          data: data14,
                                         },
                                       ];
                                       return false;
                                     }
                                   }
-                                  var valid0 = _errs30 === errors;
+                                  var valid0 = _errs28 === errors;
                                 } else {
                                   var valid0 = true;
+                                }
+                                if (valid0) {
+                                  if (data.sizing !== undefined) {
+                                    let data16 = data.sizing;
+                                    const _errs31 = errors;
+                                    if (errors === _errs31) {
+                                      if (Array.isArray(data16)) {
+                                        if (data16.length > 20) {
+                                          validate10.errors = [
+                                            {
+                                              instancePath: instancePath + '/sizing',
+                                              schemaPath: '#/properties/sizing/maxItems',
+                                              keyword: 'maxItems',
+                                              params: { limit: 20 },
+                                              message: 'must NOT have more than 20 items',
+                                              schema: 20,
+                                              parentSchema: schema11.properties.sizing,
+                                              data: data16,
+                                            },
+                                          ];
+                                          return false;
+                                        } else {
+                                          var valid8 = true;
+                                          const len3 = data16.length;
+                                          for (let i3 = 0; i3 < len3; i3++) {
+                                            const _errs33 = errors;
+                                            if (
+                                              !validate71(data16[i3], {
+                                                instancePath: instancePath + '/sizing/' + i3,
+                                                parentData: data16,
+                                                parentDataProperty: i3,
+                                                rootData,
+                                              })
+                                            ) {
+                                              vErrors =
+                                                vErrors === null
+                                                  ? validate71.errors
+                                                  : vErrors.concat(validate71.errors);
+                                              errors = vErrors.length;
+                                            }
+                                            var valid8 = _errs33 === errors;
+                                            if (!valid8) {
+                                              break;
+                                            }
+                                          }
+                                        }
+                                      } else {
+                                        validate10.errors = [
+                                          {
+                                            instancePath: instancePath + '/sizing',
+                                            schemaPath: '#/properties/sizing/type',
+                                            keyword: 'type',
+                                            params: { type: 'array' },
+                                            message: 'must be array',
+                                            schema: schema11.properties.sizing.type,
+                                            parentSchema: schema11.properties.sizing,
+                                            data: data16,
+                                          },
+                                        ];
+                                        return false;
+                                      }
+                                    }
+                                    var valid0 = _errs31 === errors;
+                                  } else {
+                                    var valid0 = true;
+                                  }
                                 }
                               }
                             }

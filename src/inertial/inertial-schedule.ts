@@ -16,6 +16,8 @@ export function scheduleInertialMeasurements(model: InertialModel, rows: readonl
   const endS = rows[last].tS;
   const byBoundary: ScheduledMeasurement[][] = rows.map(() => []);
   const rByKey = noiseByKey(model);
+  // An h equal to the last one of its key (a straight segment) shares that key's arrays instead of new ones.
+  const lastH = new Map<string, { hIdx: Int32Array; hVal: Float64Array }>();
   for (const stream of model.streams) {
     for (let j = 0; ; j++) {
       const tS = j / stream.rateHz;
@@ -23,14 +25,26 @@ export function scheduleInertialMeasurements(model: InertialModel, rows: readonl
       const k = Math.min(last, Math.max(0, Math.ceil(tS / stepS - 1e-9)));
       if (inOutage(stream.outages, rows[k].tS)) continue;
       for (const row of stream.rowsAt(rows[k])) {
-        const h = row.h.filter(([, x]) => x !== 0).sort((a, b) => a[0] - b[0]);
+        const { hIdx, hVal } = sparseRow(row.key, row.h, lastH);
+        const r = rByKey.get(row.noiseKey) ?? NO_NOISE;
         byBoundary[k].push({
-          key: row.key, sensorId: stream.sensorId, tS,
-          hIdx: Int32Array.from(h, ([i]) => i), hVal: Float64Array.from(h, ([, x]) => x),
-          ...(rByKey.get(row.noiseKey) ?? NO_NOISE),
+          key: row.key, sensorId: stream.sensorId, tS, hIdx, hVal,
+          rSources: r.rSources, rVariances: r.rVariances, rTotal: r.rTotal,
         });
       }
     }
   }
   return byBoundary;
+}
+
+/** The non-zeros of h by increasing state, as the arrays last made for `key` when they hold the same values. */
+function sparseRow(
+  key: string, h: readonly (readonly [number, number])[], lastH: Map<string, { hIdx: Int32Array; hVal: Float64Array }>,
+): { hIdx: Int32Array; hVal: Float64Array } {
+  const kept = h.filter(([, x]) => x !== 0).sort((a, b) => a[0] - b[0]);
+  const last = lastH.get(key);
+  if (last && last.hIdx.length === kept.length && kept.every(([i, x], e) => last.hIdx[e] === i && last.hVal[e] === x)) return last;
+  const made = { hIdx: Int32Array.from(kept, ([i]) => i), hVal: Float64Array.from(kept, ([, x]) => x) };
+  lastH.set(key, made);
+  return made;
 }

@@ -20,13 +20,19 @@ const MAX_TERMS = 40;
 export function seriesVectors(fh: Float64Array, n: number, g: Float64Array): Float64Array[] {
   const terms = [Float64Array.from(g)];
   const sum = Float64Array.from(g, Math.abs);
+  // F h by compressed rows: the zero entries add nothing to the sums, so skipping them keeps every bit.
+  const rowStart = new Int32Array(n + 1), col: number[] = [], val: number[] = [];
+  for (let i = 0; i < n; i++) {
+    for (let k = 0; k < n; k++) if (fh[i * n + k] !== 0) { col.push(k); val.push(fh[i * n + k]); }
+    rowStart[i + 1] = col.length;
+  }
   for (let j = 1; j < MAX_TERMS; j++) {
     const prev = terms[j - 1];
     const next = new Float64Array(n);
     let done = true;
     for (let i = 0; i < n; i++) {
       let s = 0;
-      for (let k = 0; k < n; k++) s += fh[i * n + k] * prev[k];
+      for (let p = rowStart[i]; p < rowStart[i + 1]; p++) s += val[p] * prev[col[p]];
       s /= j;
       next[i] = s;
       if (s !== 0 && Math.abs(s) > 1e-17 * sum[i]) done = false;

@@ -6,7 +6,7 @@
  * machines are noisy, so speed targets live here, never in a timed test.
  *
  * Target (issue "From sensor logs to grid rows"): the Allan curve of
- * 10 million samples under 2 s.
+ * 10 million samples under 2 s; issue #9 asks for parsing under 4 s and the curve under 1.5 s.
  */
 import { allanDeviationCurve } from '../../src/allan/allan-curve';
 import { analyseAllanCurve } from '../../src/allan/allan-analysis';
@@ -55,7 +55,7 @@ let points = 0;
 const curveMs = medianMs(() => {
   points = allanDeviationCurve(rate, RATE_HZ).tauS.length;
 }, 5);
-console.log(`Allan curve (overlapping, ${points} cluster sizes): median ${(curveMs / 1000).toFixed(2)} s (target < 2 s)`);
+console.log(`Allan curve (overlapping, ${points} cluster sizes): median ${(curveMs / 1000).toFixed(2)} s (target < 1.5 s, issue #9)`);
 
 const curve = allanDeviationCurve(rate, RATE_HZ);
 const analysisMs = medianMs(() => analyseAllanCurve(curve, 'gyro'), 5);

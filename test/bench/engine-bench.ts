@@ -7,13 +7,12 @@
  * sources) under 100 ms, growing linearly with mission length and with the
  * number of sources.
  */
-import { pathToFileURL } from 'node:url';
-import { resolve } from 'node:path';
 import { computeBudget } from '../../src/pipeline';
 import type { BudgetInput } from '../../src/inputs/budget-input';
 import { scenarioR2 } from '../fixtures/reference-scenarios';
 import { growthExponent } from './growth-exponent';
 import { medianMs } from './median-time';
+import { importBaseline } from './baseline-src';
 
 function scaledMission(factor: number): BudgetInput {
   const b = scenarioR2();
@@ -32,9 +31,8 @@ function withExtraSources(extra: number): BudgetInput {
 }
 
 const r2 = scenarioR2();
-// BASELINE_SRC=<older checkout>/src times that code's pipeline beside this one, alternating runs in this process.
-const baseline = process.env.BASELINE_SRC;
-const oldPipeline = baseline ? await import(pathToFileURL(resolve(baseline, 'pipeline.ts')).href) : undefined;
+// The code before the performance work (baseline-src.ts), timed beside this one in alternation in this process.
+const oldPipeline = await importBaseline<typeof import('../../src/pipeline')>('pipeline.ts');
 const newTimes: number[] = [], oldTimes: number[] = [];
 for (let i = 0; i < 23; i++) {
   newTimes.push(medianMs(() => computeBudget(r2), 1, i === 0 ? 2 : 0));

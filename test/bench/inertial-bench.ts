@@ -11,6 +11,7 @@ import type { InertialBudgetInput } from '../../src/inertial/inertial-input';
 import { droneScenario } from '../fixtures/inertial-scenarios';
 import { growthExponent } from './growth-exponent';
 import { medianMs } from './median-time';
+import { alternatingMedians, importBaseline, versusOld } from './baseline-src';
 
 function benchCase(): InertialBudgetInput {
   const b = droneScenario();
@@ -38,8 +39,10 @@ function withExtraSources(extra: number): InertialBudgetInput {
 const base = benchCase();
 const probe = runInertialBudget(base);
 const n = probe.model.states.length, sources = probe.model.sources.length;
-const ms = medianMs(() => runInertialBudget(base), 5, 1);
-console.log(`3-D flight (${probe.run.steps - 1} steps, ${n} states, ${sources} sources, contributions): median ${ms.toFixed(0)} ms (target < 250 ms)`);
+const old = await importBaseline<typeof import('../../src/inertial/run-inertial')>('inertial/run-inertial.ts');
+const { newMs: ms, oldMs } = alternatingMedians(() => runInertialBudget(base), old && (() => old.runInertialBudget(base)), 5, 1);
+console.log(`3-D flight (${probe.run.steps - 1} steps, ${n} states, ${sources} sources, contributions): median ${ms.toFixed(0)} ms`
+  + ` (target < 250 ms)${versusOld(ms, oldMs)}`);
 
 const lengthPoints: [number, number][] = [0.5, 1, 2].map((f) => {
   const b = scaled(f);

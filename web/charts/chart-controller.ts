@@ -2,6 +2,7 @@ import type { ChartDataset, ChartOptions } from 'chart.js';
 import type { ReactiveController, ReactiveControllerHost } from 'lit';
 import { Chart } from './register-charts';
 import { outageBands } from './outage-bands';
+import { keptIndices, pick } from './decimate-series';
 
 /** A line dataset of the findings: values by step, null where there is nothing to draw. */
 export type LineDataset = ChartDataset<'line', (number | null)[]>;
@@ -37,8 +38,12 @@ export class ChartController implements ReactiveController {
     this.chart = undefined;
   }
 
-  /** Draws `data` on `canvas`: a new chart the first time (or on a new canvas), an in-place update afterwards. */
-  draw(canvas: HTMLCanvasElement, data: LineChartData): void {
+  /**
+   * Draws `data` on `canvas`: a new chart the first time (or on a new canvas), an in-place update afterwards.
+   * A very long series is thinned for drawing only (decimate-series.ts); the result's numbers stay exact.
+   */
+  draw(canvas: HTMLCanvasElement, full: LineChartData): void {
+    const data = thinned(full, Math.max(500, canvas.clientWidth || 1000));
     const chart = this.chart;
     if (!chart || chart.canvas !== canvas) {
       chart?.destroy();
@@ -59,4 +64,15 @@ export class ChartController implements ReactiveController {
     chart.options = data.options;
     chart.update('none');
   }
+}
+
+/** The chart's data with every series at the steps keptIndices chooses (the same object when nothing is thinned). */
+function thinned(data: LineChartData, buckets: number): LineChartData {
+  const kept = keptIndices(data.labels.length, data.datasets.map((d) => d.data), buckets);
+  if (kept.length === data.labels.length) return data;
+  return {
+    ...data,
+    labels: pick(data.labels, kept),
+    datasets: data.datasets.map((d) => ({ ...d, data: pick(d.data, kept) })),
+  };
 }
