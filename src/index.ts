@@ -97,3 +97,7 @@ export { ALLAN_SENSOR_KINDS, SENSOR_TERM_UNITS, type AllanSensorKind } from './a
 export { calibrationReport, checkCalibrationUnit, type CalibrationReport } from './calibration/calibration-report';
 export { fitOffsetAndScaleFactor } from './calibration/linear-calibration';
 export { checkResidualWhiteness } from './calibration/residual-whiteness';
+
+// Comparing candidate rows for a sensor (src/compare/) and grade presets to start a sensor from.
+export * from './compare';
+export { GRADE_PRESETS, presetRows, presetsFor, type GradePreset, type AcceptedRows } from './presets/grade-presets';
