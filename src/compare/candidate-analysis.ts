@@ -29,6 +29,8 @@ export interface CandidateAnalysis {
   problems: string[];
   requirements: RequirementResult[];
   curves: RequirementCurve[];
+  /** Every aiding sensor's outages (label "sensor outage"), for shading the curves' charts. */
+  outages: { label: string; fromS: number; toS: number }[];
 }
 
 /** Analyses one candidate's document (a pure function of the document). */
@@ -47,14 +49,15 @@ export function analyseCandidateDocument(doc: BudgetDocument): CandidateAnalysis
   ];
   if (!a.budget) {
     const where = a.blocked?.path ? `${a.blocked.path}: ` : '';
-    return { status: 'blocked', problems: [...problems, `${where}${a.blocked?.message ?? 'nothing could be computed'}`], requirements: [], curves: [] };
+    return { status: 'blocked', problems: [...problems, `${where}${a.blocked?.message ?? 'nothing could be computed'}`], requirements: [], curves: [], outages: [] };
   }
   const t = a.budget.series.tS;
   const keep = thinnedSteps(t.length);
   const curves = requirementSeries(a.budget).map((r) => ({
     requirementId: r.id, unit: r.unit, limit: r.limit, tS: keep.map((k) => t[k]), values: keep.map((k) => r.values[k]),
   }));
-  return { status: a.partial ? 'partial' : 'complete', problems, requirements: a.budget.requirements, curves };
+  const outages = a.budget.model.streams.flatMap((st) => st.outages.map((o) => ({ label: `${st.sensorId} ${o.id}`, fromS: o.startS, toS: o.endS })));
+  return { status: a.partial ? 'partial' : 'complete', problems, requirements: a.budget.requirements, curves, outages };
 }
 
 /** Indices of every n-th step and the last, at most MAX_CURVE_POINTS + 1 of them. */

@@ -8,3 +8,4 @@ export {
 } from './compare-candidates';
 export { comparisonTable, cheapestText, type ComparisonRow, type ComparisonTable } from './comparison-table';
 export { formatComparison } from './comparison-text';
+export { candidateCharts } from './candidate-charts';
