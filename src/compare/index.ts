@@ -9,3 +9,4 @@ export {
 export { comparisonTable, cheapestText, type ComparisonRow, type ComparisonTable } from './comparison-table';
 export { formatComparison } from './comparison-text';
 export { candidateCharts } from './candidate-charts';
+export { keepRowsAsCandidate } from './candidate-edits';
