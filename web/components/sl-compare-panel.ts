@@ -18,9 +18,10 @@ export class SlComparePanel extends LitElement {
     :host { display: block; }
     h3 { font-size: 13px; margin: 12px 0 4px; }
     .scroll { overflow-x: auto; max-width: 100%; }
-    table { border-collapse: collapse; margin: 6px 0; font-variant-numeric: tabular-nums; }
-    th, td { border-bottom: 1px solid var(--sl-rule); padding: 3px 8px; text-align: right; white-space: nowrap; }
-    th:first-child, td:first-child { text-align: left; white-space: normal; min-width: 16em; }
+    table { border-collapse: collapse; margin: 6px 0; font-size: 12px; font-variant-numeric: tabular-nums; }
+    th, td { border-bottom: 1px solid var(--sl-rule); padding: 3px 6px; text-align: right; white-space: nowrap; }
+    th:first-child, td:first-child { text-align: left; white-space: normal; min-width: 11em; max-width: 17em; }
+    h4 { font-size: 12px; margin: 10px 0 2px; }
     td.fail { color: var(--sl-fail); font-weight: 600; }
     td.pass { color: var(--sl-pass); }
     th.best { background: var(--sl-accent-soft); }
@@ -72,7 +73,7 @@ export class SlComparePanel extends LitElement {
       </table></div>
       <p id=${`cheapest-${slot.sensorId}`}>${cheapestText(slot)}</p>
       ${slot.outcomes.flatMap((o) => o.problems.map((p) => html`<p class="error">${o.candidateId}: ${p}</p>`))}
-      ${candidateCharts(slot).map((chart, i) => html`<div class="chart">${unsafeSVG(renderLineChartSvg(chart, `compare-${slot.sensorId}-${i}`))}</div>`)}
+      ${candidateCharts(slot).map((chart, i) => html`<h4>${chart.title}</h4><div class="chart">${unsafeSVG(renderLineChartSvg(chart, `compare-${slot.sensorId}-${i}`))}</div>`)}
     `;
   }
 
