@@ -25,7 +25,7 @@ function slotBlocks(slot: SlotComparison): ReportBlock[] {
     {
       kind: 'table', id: `candidates-${slot.sensorId}`,
       caption: `Candidates for ${slot.sensorId}${slot.note ? ` (${slot.note})` : ''}`,
-      columns: ['', ...table.candidates], rows: table.rows.map((r) => [r.label, ...r.cells]),
+      columns: ['', ...table.candidates], numericColumns: table.candidates.map((_, i) => i + 1), rows: table.rows.map((r) => [r.label, ...r.cells]),
     },
     { kind: 'paragraph', text: cheapestText(slot) },
   ];
