@@ -17,13 +17,18 @@ export function compareCommand(file: string, json: boolean, io: Io): number {
   if (reportProblems(loaded, io)) return EXIT.badInput;
   throwIfBlocked(loaded);
   if (!loaded.document.candidates?.length) {
-    throw new InputError(loaded.fileName, 'has no candidates to compare; add a "candidates" list (budgets/FORMAT.md, "Candidates")');
+    throw new InputError(
+      loaded.fileName,
+      'has no candidates to compare; add a "candidates" list (budgets/FORMAT.md, "Candidates")',
+    );
   }
   const comparison = compareCandidates(loaded.document, {
     fileName: loaded.fileName,
     onRun: (done, total) => io.err(`candidate ${done} of ${total} done\n`),
   });
-  io.out(escapeTerminalText(json ? `${JSON.stringify(comparison)}\n` : formatComparison(comparison, loaded.document.title)));
+  io.out(
+    escapeTerminalText(json ? `${JSON.stringify(comparison)}\n` : formatComparison(comparison, loaded.document.title)),
+  );
   return everySlotHasAPass(comparison) ? EXIT.pass : EXIT.fail;
 }
 
@@ -32,7 +37,9 @@ const everySlotHasAPass = (c: CandidateComparison) => c.slots.every((s) => s.out
 export const COMPARE_COMMAND: CliCommand = {
   operands: ['FILE'],
   synopsis: '[--json]',
-  description: "each candidate of the document's \"candidates\" in place of its sensor's rows, against the same\nmission and requirements: verdicts, margins and times to exceed side by side, and the cheapest that passes",
+  description:
+    'each candidate of the document\'s "candidates" in place of its sensor\'s rows, against the same\n' +
+    'mission and requirements: verdicts, margins and times to exceed side by side, and the cheapest that passes',
   options: { ...JSON_OPTION },
   run: ([file], values, io) => compareCommand(file, values.json === true, io),
 };

@@ -49,14 +49,26 @@ export function analyseCandidateDocument(doc: BudgetDocument): CandidateAnalysis
   ];
   if (!a.budget) {
     const where = a.blocked?.path ? `${a.blocked.path}: ` : '';
-    return { status: 'blocked', problems: [...problems, `${where}${a.blocked?.message ?? 'nothing could be computed'}`], requirements: [], curves: [], outages: [] };
+    return {
+      status: 'blocked',
+      problems: [...problems, `${where}${a.blocked?.message ?? 'nothing could be computed'}`],
+      requirements: [],
+      curves: [],
+      outages: [],
+    };
   }
   const t = a.budget.series.tS;
   const keep = thinnedSteps(t.length);
   const curves = requirementSeries(a.budget).map((r) => ({
-    requirementId: r.id, unit: r.unit, limit: r.limit, tS: keep.map((k) => t[k]), values: keep.map((k) => r.values[k]),
+    requirementId: r.id,
+    unit: r.unit,
+    limit: r.limit,
+    tS: keep.map((k) => t[k]),
+    values: keep.map((k) => r.values[k]),
   }));
-  const outages = a.budget.model.streams.flatMap((st) => st.outages.map((o) => ({ label: `${st.sensorId} ${o.id}`, fromS: o.startS, toS: o.endS })));
+  const outages = a.budget.model.streams.flatMap((st) =>
+    st.outages.map((o) => ({ label: `${st.sensorId} ${o.id}`, fromS: o.startS, toS: o.endS })),
+  );
   return { status: a.partial ? 'partial' : 'complete', problems, requirements: a.budget.requirements, curves, outages };
 }
 

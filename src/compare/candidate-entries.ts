@@ -55,16 +55,32 @@ export function readCandidateSlots(doc: BudgetDocument, fileName: string): Candi
     const path = `candidates[${i}]`;
     if (!doc.sensors.some((s) => s.id === slot.sensor)) {
       const known = doc.sensors.map((s) => s.id).join(', ');
-      throw new BudgetFileError(fileName, `${path}.sensor`, `no sensor "${slot.sensor}"; the document has ${known || 'none'}`);
+      throw new BudgetFileError(
+        fileName,
+        `${path}.sensor`,
+        `no sensor "${slot.sensor}"; the document has ${known || 'none'}`,
+      );
     }
     const first = seenSensors.get(nameKey(slot.sensor));
     if (first !== undefined) {
-      throw new BudgetFileError(fileName, `${path}.sensor`, `sensor "${slot.sensor}" already has candidates at candidates[${first}]; put them in one list`);
+      throw new BudgetFileError(
+        fileName,
+        `${path}.sensor`,
+        `sensor "${slot.sensor}" already has candidates at candidates[${first}]; put them in one list`,
+      );
     }
     seenSensors.set(nameKey(slot.sensor), i);
-    requireUnique(slot.options.map((o, j) => ({ id: o.id, path: `${path}.options[${j}].id` })), 'candidate ids within a sensor', fileName);
+    requireUnique(
+      slot.options.map((o, j) => ({ id: o.id, path: `${path}.options[${j}].id` })),
+      'candidate ids within a sensor',
+      fileName,
+    );
     slot.options.forEach((o, j) => {
-      requireUnique(o.sources.map((r, k) => ({ id: r.id, path: `${path}.options[${j}].sources[${k}].id` })), 'row ids within a candidate', fileName);
+      requireUnique(
+        o.sources.map((r, k) => ({ id: r.id, path: `${path}.options[${j}].sources[${k}].id` })),
+        'row ids within a candidate',
+        fileName,
+      );
     });
   });
   return slots;
@@ -74,7 +90,12 @@ function requireUnique(items: { id: string; path: string }[], what: string, file
   const seen = new Map<string, string>();
   for (const item of items) {
     const before = seen.get(nameKey(item.id));
-    if (before) throw new BudgetFileError(fileName, item.path, `"${item.id}" is already used by ${before}; ${what} must differ in more than letter case`);
+    if (before)
+      throw new BudgetFileError(
+        fileName,
+        item.path,
+        `"${item.id}" is already used by ${before}; ${what} must differ in more than letter case`,
+      );
     seen.set(nameKey(item.id), item.path);
   }
 }

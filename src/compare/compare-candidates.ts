@@ -33,7 +33,10 @@ export interface SlotComparison {
   currency?: string;
   note?: string;
   outcomes: CandidateOutcome[];
-  /** The passing candidate with the lowest price (the first in document order on a tie); undefined when none is priced and passing. */
+  /**
+   * The passing candidate with the lowest price (the first in document order
+   * on a tie); undefined when none is priced and passing.
+   */
   cheapestPassing?: string;
   /** Candidates that pass but have no price, so could not be ranked. */
   passingUnpriced: string[];
@@ -61,16 +64,32 @@ export interface CompareOptions {
  * @throws BudgetFileError for a slot naming a missing sensor or a repeated id.
  */
 export function candidateRuns(doc: BudgetDocument, fileName = 'budget'): CandidateRun[] {
-  return readCandidateSlots(doc, fileName).flatMap((slot, slotIndex) => slot.options.map((_, optionIndex) => ({ slotIndex, optionIndex })));
+  return readCandidateSlots(doc, fileName).flatMap((slot, slotIndex) =>
+    slot.options.map((_, optionIndex) => ({ slotIndex, optionIndex })),
+  );
 }
 
 /** Analyses one candidate in place of its sensor's rows. Bad cells come back in the outcome, never as a throw. */
-export function runCandidate(doc: BudgetDocument, run: CandidateRun, analyse: CandidateAnalyser = analyseCandidateDocument): CandidateOutcome {
+export function runCandidate(
+  doc: BudgetDocument,
+  run: CandidateRun,
+  analyse: CandidateAnalyser = analyseCandidateDocument,
+): CandidateOutcome {
   const slot = doc.candidates![run.slotIndex];
   const option = slot.options[run.optionIndex];
   const analysis = analyse(withCandidateRows(doc, slot.sensor, option));
-  const passesAll = analysis.status === 'complete' && analysis.requirements.length > 0 && analysis.requirements.every((r) => r.verdict === 'pass');
-  return { ...run, sensorId: slot.sensor, candidateId: option.id, ...(option.price !== undefined && { price: option.price }), ...analysis, passesAll };
+  const passesAll =
+    analysis.status === 'complete' &&
+    analysis.requirements.length > 0 &&
+    analysis.requirements.every((r) => r.verdict === 'pass');
+  return {
+    ...run,
+    sensorId: slot.sensor,
+    candidateId: option.id,
+    ...(option.price !== undefined && { price: option.price }),
+    ...analysis,
+    passesAll,
+  };
 }
 
 /**
@@ -86,10 +105,16 @@ export function assembleComparison(doc: BudgetDocument, outcomes: CandidateOutco
       return found;
     });
     const priced = mine.filter((o) => o.passesAll && o.price !== undefined);
-    const cheapest = priced.reduce<CandidateOutcome | undefined>((best, o) => (best === undefined || o.price! < best.price! ? o : best), undefined);
+    const cheapest = priced.reduce<CandidateOutcome | undefined>(
+      (best, o) => (best === undefined || o.price! < best.price! ? o : best),
+      undefined,
+    );
     return {
-      sensorId: slot.sensor, ...(slot.currency && { currency: slot.currency }), ...(slot.note && { note: slot.note }),
-      outcomes: mine, ...(cheapest && { cheapestPassing: cheapest.candidateId }),
+      sensorId: slot.sensor,
+      ...(slot.currency && { currency: slot.currency }),
+      ...(slot.note && { note: slot.note }),
+      outcomes: mine,
+      ...(cheapest && { cheapestPassing: cheapest.candidateId }),
       passingUnpriced: mine.filter((o) => o.passesAll && o.price === undefined).map((o) => o.candidateId),
     };
   });

@@ -31,7 +31,10 @@ export function comparisonTable(slot: SlotComparison): ComparisonTable {
   const outs = slot.outcomes;
   const rows: ComparisonRow[] = [];
   if (outs.some((o) => o.price !== undefined)) {
-    rows.push({ label: `price${slot.currency ? ` (${slot.currency})` : ''}`, cells: outs.map((o) => (o.price === undefined ? 'not given' : fmt(o.price))) });
+    rows.push({
+      label: `price${slot.currency ? ` (${slot.currency})` : ''}`,
+      cells: outs.map((o) => (o.price === undefined ? 'not given' : fmt(o.price))),
+    });
   }
   const reference = outs.find((o) => o.requirements.length > 0);
   for (const req of reference?.requirements ?? []) {
@@ -50,7 +53,10 @@ export function comparisonTable(slot: SlotComparison): ComparisonTable {
       });
     });
   }
-  rows.push({ label: 'analysis', cells: outs.map((o) => (o.status === 'complete' ? 'complete' : o.status === 'partial' ? 'PARTIAL' : 'BLOCKED')) });
+  rows.push({
+    label: 'analysis',
+    cells: outs.map((o) => (o.status === 'complete' ? 'complete' : o.status === 'partial' ? 'PARTIAL' : 'BLOCKED')),
+  });
   rows.push({ label: 'passes every requirement', cells: outs.map((o) => (o.passesAll ? 'yes' : 'no')) });
   return { candidates: outs.map((o) => o.candidateId), rows };
 }
@@ -59,11 +65,15 @@ const maybe = (x: number | undefined) => (x === undefined ? '' : fmt(x));
 
 /** The sentence naming the cheapest passing candidate, or why there is none. */
 export function cheapestText(slot: SlotComparison): string {
-  const unpriced = slot.passingUnpriced.length ? ` (${slot.passingUnpriced.join(', ')} also pass${slot.passingUnpriced.length === 1 ? 'es' : ''} but ${slot.passingUnpriced.length === 1 ? 'has' : 'have'} no price)` : '';
+  const n = slot.passingUnpriced.length;
+  const verbs = n === 1 ? 'passes but has' : 'pass but have';
+  const unpriced = n ? ` (${slot.passingUnpriced.join(', ')} also ${verbs} no price)` : '';
+  const currency = slot.currency ? ` ${slot.currency}` : '';
   if (slot.cheapestPassing) {
     const best = slot.outcomes.find((o) => o.candidateId === slot.cheapestPassing)!;
-    return `Cheapest candidate for ${slot.sensorId} that passes every requirement: ${best.candidateId} (${fmt(best.price!)}${slot.currency ? ` ${slot.currency}` : ''})${unpriced}.`;
+    const what = `${best.candidateId} (${fmt(best.price!)}${currency})`;
+    return `Cheapest candidate for ${slot.sensorId} that passes every requirement: ${what}${unpriced}.`;
   }
-  if (slot.passingUnpriced.length) return `No priced candidate for ${slot.sensorId} passes every requirement${unpriced}.`;
+  if (n) return `No priced candidate for ${slot.sensorId} passes every requirement${unpriced}.`;
   return `No candidate for ${slot.sensorId} passes every requirement.`;
 }

@@ -36,29 +36,67 @@ const BI_TIME_NOTE = '; correlation time 100 s, the usual assumption when unknow
 
 function gyroRows(arw: number, arwRange: string, floor: number, drift: number, driftSource: string): PresetRow[] {
   return [
-    { id: 'arw', kind: 'white-noise', value: arw, unit: 'deg/√h', dimension: 'angle-random-walk', provenance: ARW_RANGE(arwRange) },
-    { id: 'bi', kind: 'bias-instability', value: floor, unit: 'deg/h', dimension: 'angular-rate', correlationTime: BI_TIME, provenance: FIXTURE + BI_TIME_NOTE },
-    { id: 'bias', kind: 'turn-on-bias', value: drift, unit: 'deg/h', dimension: 'angular-rate', provenance: driftSource },
+    {
+      id: 'arw',
+      kind: 'white-noise',
+      value: arw,
+      unit: 'deg/√h',
+      dimension: 'angle-random-walk',
+      provenance: ARW_RANGE(arwRange),
+    },
+    {
+      id: 'bi',
+      kind: 'bias-instability',
+      value: floor,
+      unit: 'deg/h',
+      dimension: 'angular-rate',
+      correlationTime: BI_TIME,
+      provenance: FIXTURE + BI_TIME_NOTE,
+    },
+    {
+      id: 'bias',
+      kind: 'turn-on-bias',
+      value: drift,
+      unit: 'deg/h',
+      dimension: 'angular-rate',
+      provenance: driftSource,
+    },
   ];
 }
 
 /** The grade presets, from the noisiest to the best. */
 export const GRADE_PRESETS: readonly GradePreset[] = [
   {
-    id: 'consumerMems', label: 'consumer MEMS',
+    id: 'consumerMems',
+    label: 'consumer MEMS',
     rows: gyroRows(0.3, '0.2-1', 10, 360, `gyro drift 0.1 °/s (360 °/h) of the commercial grade, ${TABLE_1}`),
   },
   {
-    id: 'industrialMems', label: 'industrial MEMS',
-    rows: gyroRows(0.15, '0.1-0.3', 2, 36, `0.01 °/s (36 °/h), between the commercial and tactical grades' drift: ${FIXTURE}`),
+    id: 'industrialMems',
+    label: 'industrial MEMS',
+    rows: gyroRows(
+      0.15,
+      '0.1-0.3',
+      2,
+      36,
+      `0.01 °/s (36 °/h), between the commercial and tactical grades' drift: ${FIXTURE}`,
+    ),
   },
   {
-    id: 'tactical', label: 'tactical',
+    id: 'tactical',
+    label: 'tactical',
     rows: gyroRows(0.05, '0.02-0.5', 0.5, 10, `gyro drift 1-10 °/h of the tactical grade (the upper end), ${TABLE_1}`),
   },
   {
-    id: 'navigation', label: 'navigation',
-    rows: gyroRows(0.002, '0.002-0.005', 0.005, 0.01, `gyro drift < 0.01 °/h of the navigation grade (the bound), ${TABLE_1}`),
+    id: 'navigation',
+    label: 'navigation',
+    rows: gyroRows(
+      0.002,
+      '0.002-0.005',
+      0.005,
+      0.01,
+      `gyro drift < 0.01 °/h of the navigation grade (the bound), ${TABLE_1}`,
+    ),
   },
 ];
 
@@ -79,8 +117,12 @@ export function presetRows(presetId: string): SourceRow[] {
   const preset = GRADE_PRESETS.find((p) => p.id === presetId);
   if (!preset) throw new Error(`no grade preset "${presetId}"; one of ${GRADE_PRESETS.map((p) => p.id).join(', ')}`);
   return preset.rows.map((r) => ({
-    id: r.id, kind: r.kind, value: r.value, unit: r.unit,
+    id: r.id,
+    kind: r.kind,
+    value: r.value,
+    unit: r.unit,
     ...(r.correlationTime && { correlationTime: { ...r.correlationTime } }),
-    provenance: `grade preset "${preset.label}": ${r.provenance}`, assumed: true,
+    provenance: `grade preset "${preset.label}": ${r.provenance}`,
+    assumed: true,
   }));
 }

@@ -15,12 +15,21 @@ describe('the review report of a budget with candidates', () => {
     const slot = compareCandidates(doc).slots[0];
     const rows = table(reportTables(renderReviewHtml(report)), 'candidates-gyro');
     const margin = rows.find((r) => r[0].text === 'fine: margin (deg)')!;
-    expect(margin.slice(1).map((c) => Number(c.text))).toEqual(slot.outcomes.map((o) => Number(o.requirements[1].margin.toPrecision(4))));
-    expect(rows.find((r) => r[0].text === 'passes every requirement')!.slice(1).map((c) => c.text)).toEqual(['no', 'no', 'yes']);
-    expect(JSON.stringify(section.blocks)).toContain('Cheapest candidate for gyro that passes every requirement: navigation');
+    expect(margin.slice(1).map((c) => Number(c.text))).toEqual(
+      slot.outcomes.map((o) => Number(o.requirements[1].margin.toPrecision(4))),
+    );
+    expect(
+      rows
+        .find((r) => r[0].text === 'passes every requirement')!
+        .slice(1)
+        .map((c) => c.text),
+    ).toEqual(['no', 'no', 'yes']);
+    expect(JSON.stringify(section.blocks)).toContain(
+      'Cheapest candidate for gyro that passes every requirement: navigation',
+    );
   });
 
-  it('overlays one curve per candidate on each requirement\'s chart, with its limit', () => {
+  it("overlays one curve per candidate on each requirement's chart, with its limit", () => {
     const charts = section.blocks.filter((b) => b.kind === 'chart');
     expect(charts.map((c) => c.chart.title)).toEqual(['coarse: candidates for gyro', 'fine: candidates for gyro']);
     for (const c of charts) {

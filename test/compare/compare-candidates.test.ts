@@ -24,7 +24,8 @@ function headingSigmaDeg(grade: Grade, tS: number): number {
 
 /** The time at which σ reaches L: the positive root of b² t² + N² t − L² = 0 (computed). */
 function timeToReachS(grade: Grade, limitDeg: number): number {
-  const n2 = (GRADES[grade].arwDegPerRootH / 60) ** 2, b2 = (GRADES[grade].biasDegPerH / 3600) ** 2;
+  const n2 = (GRADES[grade].arwDegPerRootH / 60) ** 2,
+    b2 = (GRADES[grade].biasDegPerH / 3600) ** 2;
   return (-n2 + Math.sqrt(n2 * n2 + 4 * b2 * limitDeg * limitDeg)) / (2 * b2);
 }
 
@@ -47,7 +48,11 @@ describe('comparing gyro candidates of published grades (closed form N²t + (bt)
       }
     }
     // Consumer fails both; tactical passes 0.5° only; navigation passes both.
-    expect(slot.outcomes.map((o) => o.requirements.map((r) => r.verdict).join(' '))).toEqual(['fail fail', 'pass fail', 'pass pass']);
+    expect(slot.outcomes.map((o) => o.requirements.map((r) => r.verdict).join(' '))).toEqual([
+      'fail fail',
+      'pass fail',
+      'pass pass',
+    ]);
   });
 
   it('orders the candidates by heading error as their grades do', () => {
@@ -57,7 +62,11 @@ describe('comparing gyro candidates of published grades (closed form N²t + (bt)
   });
 
   it('gives the time to exceed after the outage starts from the closed form (within 0.5 %)', () => {
-    const cases: [Grade, string, number][] = [['consumerMems', 'coarse', 0.5], ['consumerMems', 'fine', 0.1], ['tactical', 'fine', 0.1]];
+    const cases: [Grade, string, number][] = [
+      ['consumerMems', 'coarse', 0.5],
+      ['consumerMems', 'fine', 0.1],
+      ['tactical', 'fine', 0.1],
+    ];
     for (const [grade, req, limit] of cases) {
       const hold = outcome(grade).requirements.find((r) => r.id === req)!.outages[0];
       expect(hold.sensorId).toBe('gnss');
@@ -94,7 +103,9 @@ describe('comparing gyro candidates of published grades (closed form N²t + (bt)
   });
 
   it('gives the same comparison from its runs in any order (so runs can be split between machines)', () => {
-    const outcomes = candidateRuns(doc).reverse().map((run) => runCandidate(doc, run));
+    const outcomes = candidateRuns(doc)
+      .reverse()
+      .map((run) => runCandidate(doc, run));
     expect(assembleComparison(doc, outcomes)).toEqual(comparison);
   });
 
@@ -114,16 +125,22 @@ describe('candidates in the document', () => {
   it('refuses an unknown key inside a candidate, naming its path', () => {
     const d = gradeCandidates() as unknown as { candidates: { options: Record<string, unknown>[] }[] };
     d.candidates[0].options[0].cost = 3;
-    expect(() => parseBudgetDocument(JSON.stringify(d), 'grades.json')).toThrow(/grades\.json: candidates\[0\]\.options\[0\]/);
+    expect(() => parseBudgetDocument(JSON.stringify(d), 'grades.json')).toThrow(
+      /grades\.json: candidates\[0\]\.options\[0\]/,
+    );
   });
 
   it('refuses a slot for a sensor the document lacks, and repeated candidate ids', () => {
     const d = gradeCandidates();
     d.candidates![0].sensor = 'gyro2';
-    expect(() => compareCandidates(d, { fileName: 'grades.json' })).toThrow(/grades\.json: candidates\[0\]\.sensor: no sensor "gyro2"; the document has gyro, wheel, gnss/);
+    expect(() => compareCandidates(d, { fileName: 'grades.json' })).toThrow(
+      /grades\.json: candidates\[0\]\.sensor: no sensor "gyro2"; the document has gyro, wheel, gnss/,
+    );
     const e = gradeCandidates();
     e.candidates![0].options[2].id = 'Tactical';
-    expect(() => compareCandidates(e)).toThrow(/candidates\[0\]\.options\[2\]\.id: "Tactical" is already used by candidates\[0\]\.options\[1\]\.id/);
+    expect(() => compareCandidates(e)).toThrow(
+      /candidates\[0\]\.options\[2\]\.id: "Tactical" is already used by candidates\[0\]\.options\[1\]\.id/,
+    );
   });
 
   it('reports a candidate whose cell fails as partial, and it does not pass', () => {

@@ -27,7 +27,11 @@ describe('sigma-ledger compare', () => {
   }, 120_000);
 
   it('gives the comparison as JSON and exits 1 when no candidate passes', async () => {
-    const r = await runCli(['compare', file('strict.json', serializeBudgetDocument(gradeCandidates({ coarse: 1e-4 }))), '--json']);
+    const r = await runCli([
+      'compare',
+      file('strict.json', serializeBudgetDocument(gradeCandidates({ coarse: 1e-4 }))),
+      '--json',
+    ]);
     expect(r.code).toBe(1);
     const json = JSON.parse(r.out);
     expect(json.slots[0].outcomes.map((o: { passesAll: boolean }) => o.passesAll)).toEqual([false, false, false]);

@@ -14,14 +14,18 @@ import { presetRows } from '../../src/presets/grade-presets';
 const q = (value: number, unit: string) => ({ value, unit });
 
 /** ARW and turn-on bias of a preset (its bias-instability row left out). */
-export const closedFormRows = (preset: string): SourceRow[] => presetRows(preset).filter((r) => r.kind !== 'bias-instability');
+export const closedFormRows = (preset: string): SourceRow[] =>
+  presetRows(preset).filter((r) => r.kind !== 'bias-instability');
 
 /** Invented prices per unit (demo numbers, not any real part's). */
 export const PRICES = { consumerMems: 20, tactical: 4000, navigation: 90000 } as const;
 
-export function gradeCandidates(limitsDeg: { coarse: number; fine?: number } = { coarse: 0.5, fine: 0.1 }): BudgetDocument {
+export function gradeCandidates(
+  limitsDeg: { coarse: number; fine?: number } = { coarse: 0.5, fine: 0.1 },
+): BudgetDocument {
   return {
-    format: 'sigma-ledger-budget', formatVersion: 1,
+    format: 'sigma-ledger-budget',
+    formatVersion: 1,
     title: 'Gyro grades standing still (invented test scenario)',
     settings: { step: q(0.1, 's') },
     mission: {
@@ -34,17 +38,32 @@ export function gradeCandidates(limitsDeg: { coarse: number; fine?: number } = {
       { id: 'gyro', kind: 'yaw-gyro', rate: q(100, 'Hz'), sources: closedFormRows('tactical') },
       { id: 'wheel', kind: 'wheel-speed', rate: q(10, 'Hz'), sources: [] },
       {
-        id: 'gnss', kind: 'gnss-position', rate: q(1, 'Hz'), outages: [{ id: 'blocked', start: q(0, 's'), end: q(60, 's') }],
-        sources: [{ id: 'noise', kind: 'white-noise', value: 1.5, unit: 'm', provenance: 'test value', assumed: false }],
+        id: 'gnss',
+        kind: 'gnss-position',
+        rate: q(1, 'Hz'),
+        outages: [{ id: 'blocked', start: q(0, 's'), end: q(60, 's') }],
+        sources: [
+          { id: 'noise', kind: 'white-noise', value: 1.5, unit: 'm', provenance: 'test value', assumed: false },
+        ],
       },
     ],
     requirements: [
       { id: 'coarse', quantity: 'heading', level: '1sigma', limit: q(limitsDeg.coarse, 'deg') },
-      ...(limitsDeg.fine === undefined ? [] : [{ id: 'fine', quantity: 'heading' as const, level: '1sigma' as const, limit: q(limitsDeg.fine, 'deg') }]),
+      ...(limitsDeg.fine === undefined
+        ? []
+        : [{ id: 'fine', quantity: 'heading' as const, level: '1sigma' as const, limit: q(limitsDeg.fine, 'deg') }]),
     ],
-    candidates: [{
-      sensor: 'gyro', currency: 'EUR', note: 'three grades for the heading gyro',
-      options: (['consumerMems', 'tactical', 'navigation'] as const).map((id) => ({ id, price: PRICES[id], sources: closedFormRows(id) })),
-    }],
+    candidates: [
+      {
+        sensor: 'gyro',
+        currency: 'EUR',
+        note: 'three grades for the heading gyro',
+        options: (['consumerMems', 'tactical', 'navigation'] as const).map((id) => ({
+          id,
+          price: PRICES[id],
+          sources: closedFormRows(id),
+        })),
+      },
+    ],
   };
 }
