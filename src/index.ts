@@ -116,3 +116,7 @@ export {
 } from './report/inertial-view-result';
 export { INERTIAL_REQUIREMENT_QUANTITIES } from './inertial/inertial-quantities';
 export { inertialLimitDimension } from './budget/inertial-requirements';
+
+// Comparing candidate rows for a sensor (src/compare/) and grade presets to start a sensor from.
+export * from './compare';
+export { GRADE_PRESETS, presetRows, presetsFor, type GradePreset, type AcceptedRows } from './presets/grade-presets';

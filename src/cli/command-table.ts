@@ -25,4 +25,5 @@ export const COMMANDS: readonly CommandEntry[] = [
   { name: 'check', summary: 'validate a budget and evaluate its cells without running the analysis', load: async () => (await import('./check-command')).CHECK_COMMAND },
   { name: 'allan', summary: "a static log's Allan deviation and its IEEE Std 952 noise terms", load: async () => (await import('./allan-cli')).ALLAN_COMMAND },
   { name: 'calibrate', summary: "a sensor's offset and scale factor against known truth", load: async () => (await import('./calibrate-cli')).CALIBRATE_COMMAND },
+  { name: 'compare', summary: 'candidate rows for a sensor side by side: verdicts, margins, cheapest that passes', load: async () => (await import('./compare-command')).COMPARE_COMMAND },
 ];

@@ -89,7 +89,10 @@ export const outageBands: Plugin<'line', OutageBandOptions> = {
       }
     }
     ctx.textBaseline = 'top';
-    labelRows(ctx, placed).forEach((row, i) => ctx.fillText(placed[i].text, placed[i].left + 3, area.top + 2 + row * ROW_PX));
+    // A label starts at its band's left edge, but moves left to stay inside the plot area near the right end.
+    const starts = placed.map((p) => Math.max(area.left + 2, Math.min(p.left + 3, area.right - ctx.measureText(p.text).width - 2)));
+    const rows = labelRows(ctx, placed.map((p, i) => ({ left: starts[i], text: p.text })));
+    rows.forEach((row, i) => ctx.fillText(placed[i].text, starts[i], area.top + 2 + row * ROW_PX));
     ctx.restore();
   },
 };

@@ -1,5 +1,5 @@
 import type { ChartOptions, TooltipItem } from 'chart.js';
-import { yTickLabels } from './y-tick-labels';
+import { narrowLogTicks, yTickLabels } from './y-tick-labels';
 import { formatSignificant } from '../../src';
 import type { OutageBand } from './outage-bands';
 
@@ -50,6 +50,11 @@ export function timeChartOptions(spec: TimeChartSpec): ChartOptions<'line'> {
         ticks: { font: FONT, callback: (_v, i, ticks) => yTickLabels(ticks.map((t) => t.value), spec.logarithmic === true)[i] },
         // One width for every time plot's y axis, so their plot areas (and outage bands) line up on the page.
         afterFit: (scale) => { scale.width = Y_AXIS_WIDTH_PX; },
+        // A log axis over less than a decade gets round, evenly spaced ticks (y-tick-labels.ts).
+        afterBuildTicks: (scale) => {
+          const even = spec.logarithmic ? narrowLogTicks(scale.min, scale.max) : undefined;
+          if (even) scale.ticks = even.map((value) => ({ value }));
+        },
       },
     },
     plugins: {

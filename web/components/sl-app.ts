@@ -42,6 +42,8 @@ export class SlApp extends LitElement {
     .banner button { margin-left: auto; }
     main { flex: 1; display: grid; grid-template-columns: minmax(0, 11fr) minmax(0, 9fr); min-height: 0; }
     sl-workbench, sl-findings, sl-inertial-workbench, sl-inertial-findings { min-height: 0; overflow: auto; }
+    /* Below about 1180 px the editors need more than 11/20 of the width for the error-source grid's nine columns. */
+    @media (max-width: 1180px) { main { grid-template-columns: minmax(0, 3fr) minmax(0, 2fr); } }
     sl-workbench, sl-inertial-workbench { border-right: 1px solid var(--sl-rule); }
   `;
 

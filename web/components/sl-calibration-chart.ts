@@ -35,7 +35,7 @@ export class SlCalibrationChart extends LitElement {
   override render() {
     const g = this.group;
     if (!g) return nothing;
-    const si = g.unit === g.unitSI ? '' : ` (engine states in ${g.unitSI})`;
+    const si = g.unit === g.unitSI ? '' : g.unitSI === '1' || g.unitSI === '' ? ' (engine states as plain ratios)' : ` (engine states in ${g.unitSI})`;
     return html`
       <h3>${g.title}: 1σ in ${g.unit}${si}</h3>
       <div class="plot"><canvas role="img" aria-label=${`1σ of ${g.title} over time, in ${g.unit}`}></canvas></div>

@@ -43,7 +43,8 @@ export class SlCell extends LitElement {
     input.text { font-family: var(--sl-font); }
     input.formula { color: var(--sl-accent); }
     input[aria-invalid='true'] { border-color: var(--sl-fail); background: var(--sl-error-bg); }
-    .value { font: 11px var(--sl-mono); color: var(--sl-ink-soft); padding: 0 4px; }
+    .value { font: 11px var(--sl-mono); color: var(--sl-ink-soft); padding: 0 4px; overflow-wrap: anywhere; }
+    .value .whole { color: var(--sl-accent); }
     .message { font-size: 11px; color: var(--sl-fail); padding: 1px 4px; overflow-wrap: anywhere; }
     .sr-only { position: absolute; width: 1px; height: 1px; overflow: hidden; clip: rect(0 0 0 0); white-space: nowrap; }
   `;
@@ -71,7 +72,20 @@ export class SlCell extends LitElement {
   @state() private editing = false;
   @state() private draft = '';
   @state() private problem?: string;
+  /** True when a formula is wider than its field: the line under it then shows the whole formula. */
+  @state() private cut = false;
   @query('input') private input?: HTMLInputElement;
+  private readonly resized = new ResizeObserver(() => this.measureCut());
+
+  override connectedCallback(): void {
+    super.connectedCallback();
+    this.resized.observe(this);
+  }
+
+  override disconnectedCallback(): void {
+    this.resized.disconnect();
+    super.disconnectedCallback();
+  }
 
   /** True while the user is editing the field. */
   get isEditing(): boolean {
@@ -90,7 +104,7 @@ export class SlCell extends LitElement {
         .value=${this.editing ? this.draft : shown} ?readonly=${this.grid && !this.editing} tabindex=${this.tab}
         aria-invalid=${message ? 'true' : 'false'} aria-describedby=${describedBy || nothing}
         @keydown=${this.keydown} @input=${this.typed} @blur=${this.left} @dblclick=${() => this.grid && !this.editing && this.startEditing()} />
-      ${showValue ? html`<div id="value" class="value" title="evaluated value">= ${formatValue(this.evaluated!)}</div>` : nothing}
+      ${showValue ? html`<div id="value" class="value" title="evaluated value">${this.cut ? html`<span class="whole">${shown}</span> ` : nothing}= ${formatValue(this.evaluated!)}</div>` : nothing}
       ${message ? html`<div id="message" class=${hidden ? 'sr-only' : 'message'} role=${this.problem ? 'alert' : nothing}>${message}</div>` : nothing}
     `;
   }
@@ -100,6 +114,13 @@ export class SlCell extends LitElement {
     const input = this.input;
     const shown = cellText(this.content);
     if (input && !this.editing && input.value !== shown) input.value = shown;
+    this.measureCut();
+  }
+
+  private measureCut(): void {
+    const input = this.input;
+    const cut = !!input && !this.editing && isFormula(this.content) && input.scrollWidth > input.clientWidth + 1;
+    if (cut !== this.cut) this.cut = cut;
   }
 
   /** Focuses the field (grids call this to move the active cell). */

@@ -14,6 +14,7 @@ import './sl-checkpoint-table';
 import './sl-calibration-chart';
 import './sl-noise-ledger';
 import './sl-sizing-panel';
+import './sl-compare-panel';
 import type { BudgetDocument } from '../../src/index';
 
 /** The findings' tabs, in order, with their labels. */
@@ -157,7 +158,8 @@ export class SlFindings extends LitElement {
       case 'noise':
         return html`<sl-noise-ledger .noise=${result.noise} budget-title=${view.title} caution=${view.caution}></sl-noise-ledger>`;
       case 'sizing':
-        return html`<sl-sizing-panel .document=${this.document} .requirementIds=${result.requirements.map((r) => r.id)}></sl-sizing-panel>`;
+        return html`<sl-sizing-panel .document=${this.document} .requirementIds=${result.requirements.map((r) => r.id)}></sl-sizing-panel>
+          <h3>Candidates compared</h3><sl-compare-panel .document=${this.document}></sl-compare-panel>`;
     }
   }
 

@@ -4,6 +4,7 @@ import type { PlanView } from '../../src';
 import { planGeometry, polylinePoints, type PlanGeometry, type Px } from '../charts/plan-geometry';
 import { formatSignificant } from '../../src';
 import { seriesColour } from '../styles/palette';
+import { placeOutageLabels, type PlacedLabel } from '../charts/plan-labels';
 
 const W = 520, H = 340, MARGIN = 34;
 
@@ -37,6 +38,9 @@ export class SlPlanView extends LitElement {
     .rule { stroke: var(--sl-ink); stroke-width: 1.5; fill: none; }
     .arrowhead { fill: var(--sl-ink); }
     ul { display: flex; flex-wrap: wrap; gap: 4px 14px; list-style: none; padding: 0; margin: 4px 0 0; font-size: 12px; color: var(--sl-ink-soft); }
+    .leader { stroke: var(--sl-ink-soft); stroke-width: 0.8; fill: none; }
+    .badge circle { fill: var(--sl-panel); stroke: var(--sl-ink); stroke-width: 1; }
+    .badge text { font-size: 10px; text-anchor: middle; stroke: none; }
     .swatch { display: inline-block; width: 16px; height: 6px; border-radius: 3px; margin-right: 4px; vertical-align: middle; opacity: 0.6; }
   `;
 
@@ -49,18 +53,22 @@ export class SlPlanView extends LitElement {
     const g = planGeometry(plan, W, H, MARGIN);
     const sensors = [...new Set(plan.outages.map((o) => o.sensorId))];
     const colour = (sensorId: string) => seriesColour(sensors.indexOf(sensorId));
+    const outageItems = g.outages.map((o) => ({ at: o.path[Math.floor(o.path.length / 2)], text: `${o.sensorId} outage ${o.id}` }));
+    const placed = placeOutageLabels(outageItems, [...g.path, ...g.landmarks.map((l) => l.at)], W, H);
     return html`
       <svg viewBox="0 0 ${W} ${H}" role="img" aria-label="Nominal path from above, north up, with outages and landmarks">
         ${g.outages.map((o, i) => svg`<polyline class="outage" data-outage=${o.id} stroke=${colour(o.sensorId)} stroke-width=${Math.max(4, 10 - 3 * i)} points=${polylinePoints(o.path)}></polyline>`)}
         <polyline class="path" points=${polylinePoints(g.path)}></polyline>
         ${this.markers(g)}
         ${this.labels(g)}
+        ${placed ? this.outageLabels(placed) : this.outageBadges(outageItems.map((o) => o.at))}
         ${this.scaleAndNorth(g)}
       </svg>
       <ul>
         <li>● start, ■ end</li>
         ${plan.landmarks.length ? html`<li>△ landmark</li>` : nothing}
         ${sensors.map((s) => html`<li><span class="swatch" style=${`background: ${colour(s)}`}></span>driven while ${s} is out</li>`)}
+        ${placed ? nothing : outageItems.map((o, i) => html`<li class="numbered">${i + 1}: ${o.text}</li>`)}
       </ul>
     `;
   }
@@ -78,11 +86,23 @@ export class SlPlanView extends LitElement {
     `;
   }
 
+  /** Outage labels in a free margin, each with a leader line to its stretch of track. */
+  private outageLabels(placed: PlacedLabel[]) {
+    return placed.map((p) => svg`
+      <path class="leader" d="M${p.at.x.toFixed(1)},${p.at.y.toFixed(1)} L${(p.label.x + (p.anchor === 'start' ? -3 : 3)).toFixed(1)},${(p.label.y - 4).toFixed(1)}"></path>
+      <text class="outage-label" x=${p.label.x.toFixed(1)} y=${p.label.y.toFixed(1)} text-anchor=${p.anchor}>${p.text}</text>`);
+  }
+
+  /** Numbers on the track where no margin is wide enough for the labels (the list under the drawing names them). */
+  private outageBadges(points: Px[]) {
+    return points.map((at, i) => svg`<g class="badge" transform="translate(${(at.x + 9).toFixed(1)} ${(at.y - 9).toFixed(1)})">
+      <circle r="6.5"></circle><text y="3.5">${i + 1}</text></g>`);
+  }
+
   private labels(g: PlanGeometry) {
     const anchors = [
       { at: g.path[0], text: 'start' },
       ...g.landmarks.map((l) => ({ at: l.at, text: l.id })),
-      ...g.outages.map((o) => ({ at: o.path[Math.floor(o.path.length / 2)], text: `${o.sensorId} outage ${o.id}` })),
     ];
     return placeLabels(anchors).map((p, i) => svg`<text x=${p.x.toFixed(1)} y=${p.y.toFixed(1)}>${anchors[i].text}</text>`);
   }

@@ -7,6 +7,7 @@ import { SENSOR_KINDS, SENSOR_KIND_NAMES } from '../../src';
 import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
 import { sensorIdProblem } from '../../src';
+import { keepRowsAsCandidate, presetRows, presetsFor } from '../../src';
 import { duplicateSensor, newSensor, renameSensor } from '../grid/row-edits';
 import { blockedWithin, errorsWithin } from '../grid/view-lookup';
 import type { CellCommitDetail } from './sl-cell';
@@ -32,7 +33,7 @@ export class SlSensorList extends LitElement {
     nav button[aria-current='true'] .badge { color: #ffd9cc; }
     .add { display: inline-flex; gap: 4px; margin-left: auto; }
     .add select { width: auto; border-color: var(--sl-rule); }
-    .picked { display: grid; grid-template-columns: auto 150px auto 1fr auto auto; gap: 6px; align-items: center; margin-top: 8px; }
+    .picked { display: grid; grid-template-columns: auto 150px auto 1fr auto auto auto; gap: 6px; align-items: center; margin-top: 8px; }
   `];
 
   /** The open document's store; every edit goes through it. */
@@ -45,6 +46,8 @@ export class SlSensorList extends LitElement {
   @property({ type: Number }) selected = 0;
 
   @state() private addKind: SensorKind = SENSOR_KIND_NAMES[0];
+  /** Grade preset the new sensor's rows start from ('' for none). */
+  @state() private addPreset = '';
 
   override render() {
     const sensors = this.store.document.sensors;
@@ -56,6 +59,7 @@ export class SlSensorList extends LitElement {
           <select aria-label="Kind of the new sensor" @change=${(e: Event) => (this.addKind = (e.target as HTMLSelectElement).value as SensorKind)}>
             ${SENSOR_KIND_NAMES.map((k) => html`<option .value=${k} ?selected=${k === this.addKind}>${SENSOR_KINDS[k].label}</option>`)}
           </select>
+          ${this.presetPicker()}
           <button @click=${this.add}>Add sensor</button>
         </span>
       </div>
@@ -64,6 +68,7 @@ export class SlSensorList extends LitElement {
         <sl-cell text .content=${picked.id} label="Sensor id" @sl-commit=${this.rename}></sl-cell>
         <span class="hint">${SENSOR_KINDS[picked.kind]?.label ?? picked.kind} · ${SENSOR_KINDS[picked.kind]?.role ?? ''}</span>
         <span></span>
+        <button @click=${this.keepAsCandidate} title="Keep these rows as a candidate for this sensor; the Sizing tab compares candidates">Keep as candidate</button>
         <button @click=${this.duplicate}>Duplicate</button>
         <button @click=${this.removeSensor}>Remove</button>
       </div>` : html`<p class="empty">No sensors: add one to start the suite.</p>`}
@@ -88,9 +93,22 @@ export class SlSensorList extends LitElement {
     this.dispatchEvent(new CustomEvent('sl-note', { detail: { message }, bubbles: true, composed: true }));
   }
 
+  /** "Start from" a grade preset (src/presets/grade-presets.ts), offered only for kinds that take every preset row. */
+  private presetPicker() {
+    const presets = presetsFor(SENSOR_KINDS[this.addKind].rows);
+    if (presets.length === 0) return nothing;
+    return html`<select aria-label="Rows of the new sensor" title="Start from typical rows of a published grade; every row is marked assumed"
+      @change=${(e: Event) => (this.addPreset = (e.target as HTMLSelectElement).value)}>
+      <option value="" ?selected=${this.addPreset === ''}>no rows</option>
+      ${presets.map((p) => html`<option value=${p.id} ?selected=${p.id === this.addPreset}>${p.label} grade</option>`)}
+    </select>`;
+  }
+
   private add(): void {
     const doc = this.store.document;
     const sensor = newSensor(this.addKind, doc.sensors.map((s) => s.id));
+    const preset = presetsFor(SENSOR_KINDS[this.addKind].rows).find((p) => p.id === this.addPreset);
+    if (preset) sensor.sources = presetRows(preset.id);
     this.store.edit(`add sensor ${sensor.id}`, (d) => d.sensors.push(sensor));
     this.select(doc.sensors.length);
   }
@@ -103,6 +121,13 @@ export class SlSensorList extends LitElement {
     if (problem) return e.detail.reject(problem);
     this.store.edit(`rename sensor ${old} to ${id}`, (d) => renameSensor(d, this.selected, id));
     this.note(`Renamed ${old} to ${id}; formulas that used ${old}.… now use ${id}.…`);
+  }
+
+  private keepAsCandidate(): void {
+    const id = this.store.document.sensors[this.selected].id;
+    let kept = '';
+    this.store.edit(`keep the rows of ${id} as a candidate`, (d) => (kept = keepRowsAsCandidate(d, id)));
+    this.note(`Kept the rows of ${id} as candidate ${kept}; edit the rows and keep again, then compare in the Sizing tab.`);
   }
 
   private duplicate(): void {

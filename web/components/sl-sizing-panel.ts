@@ -3,7 +3,7 @@ import { customElement, property, state } from 'lit/decorators.js';
 import { unsafeSVG } from 'lit/directives/unsafe-svg.js';
 import { formatToTolerance, renderLineChartSvg, type BudgetDocument } from '../../src/index';
 import { formatSignificant } from '../../src';
-import type { OutageAnswer, RowAnswer, SizingJob } from '../sizing/sizing-protocol';
+import type { OutageAnswer, RowAnswer, SizeJob } from '../sizing/sizing-protocol';
 import { SizingRunner } from '../sizing/sizing-runner';
 import { sizingChart } from '../sizing/sizing-charts';
 
@@ -125,7 +125,7 @@ export class SlSizingPanel extends LitElement {
     const doc = this.document!;
     const requirementIds = this.requirementIds.filter((id) => this.isChosen(id));
     if (requirementIds.length === 0) { this.error = 'Pick at least one requirement.'; return; }
-    const job: SizingJob = this.mode === 'row'
+    const job: SizeJob = this.mode === 'row'
       ? { kind: 'row', document: doc, rowId: this.currentRow(doc.sensors.flatMap((s) => s.sources.map((r) => `${s.id}.${r.id}`))), requirementIds, points: SWEEP_POINTS }
       : this.outageJob(doc, requirementIds);
     this.running = true;
@@ -139,7 +139,7 @@ export class SlSizingPanel extends LitElement {
     }
   }
 
-  private outageJob(doc: BudgetDocument, requirementIds: string[]): SizingJob {
+  private outageJob(doc: BudgetDocument, requirementIds: string[]): SizeJob {
     const outages = doc.sensors.flatMap((s) => (s.outages ?? []).map((_, i) => ({ key: `${s.id}#${i}` })));
     const [sensorId, index] = this.currentOutage(outages).split('#');
     return { kind: 'outage', document: doc, sensorId, outageIndex: Number(index), requirementIds, points: SWEEP_POINTS };

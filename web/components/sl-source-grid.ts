@@ -23,7 +23,9 @@ const FIRST_LINE = SOURCE_COLUMNS.findIndex((c) => c.key === 'provenance');
 const SECOND_LINE_HEADERS: [string, number, number][] = [['head-provenance', FIRST_LINE, FIRST_LINE - 1], ['head-assumed', FIRST_LINE + 1, 1]];
 /** The unit an empty correlation time or rate override gets when typed into, shown beside it. */
 const UNIT_HINT: Record<string, string> = { tauUnit: 's', rateUnit: 'Hz' };
-const WIDTHS = ['8%', '18.5%', '16%', '13.5%', '8%', '7%', '7%', '7%', '15%'];
+// Kind, magnitude, unit and form hold the longest texts ("bias instability", formulas, "deg/s/√Hz", "Allan floor");
+// the correlation-time unit, rate and rate unit hold a few characters each.
+const WIDTHS = ['7%', '19%', '17%', '14%', '8%', '6.5%', '6.5%', '6.5%', '15.5%'];
 
 /**
  * The selected sensor's error sources as a grid: one row per source, a
@@ -39,7 +41,7 @@ const WIDTHS = ['8%', '18.5%', '16%', '13.5%', '8%', '7%', '7%', '7%', '15%'];
 export class SlSourceGrid extends LitElement {
   static override styles = [editorStyles, css`
     :host { display: block; }
-    table { min-width: 640px; }
+    table { min-width: 580px; }
     tbody.row > tr > td { border-bottom: none; }
     tbody.row { border-bottom: 1px solid var(--sl-rule); }
     tbody.row.active { background: var(--sl-accent-soft); }

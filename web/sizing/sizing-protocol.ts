@@ -1,9 +1,25 @@
-import type { BudgetDocument, OutageLimit, RowSweep } from '../../src/index';
+import type { BudgetDocument, CandidateComparison, OutageLimit, RowSweep } from '../../src/index';
 
 /** Page -> sizing worker: size one row's magnitude, or one outage's length, against some requirements. */
 export type SizingJob =
   | { kind: 'row'; document: BudgetDocument; rowId: string; requirementIds: string[]; points: number }
-  | { kind: 'outage'; document: BudgetDocument; sensorId: string; outageIndex: number; requirementIds: string[]; points: number };
+  | { kind: 'outage'; document: BudgetDocument; sensorId: string; outageIndex: number; requirementIds: string[]; points: number }
+  | CompareJob;
+
+/** A job that sizes a row or an outage (not a comparison). */
+export type SizeJob = Exclude<SizingJob, CompareJob>;
+
+/** Page -> sizing worker: run every candidate of the document's `candidates` (src/compare/). */
+export interface CompareJob {
+  kind: 'compare';
+  document: BudgetDocument;
+}
+
+/** The answer to a compare job. */
+export interface CompareAnswer {
+  kind: 'compare';
+  comparison: CandidateComparison;
+}
 
 /** One requirement's largest allowable value of the row, in the row's unit. */
 export interface SizedRow {
@@ -39,5 +55,5 @@ export interface OutageAnswer {
 /** Sizing worker -> page: progress, the answer, or why there is none. */
 export type SizingMessage =
   | { kind: 'progress'; done: number; total: number }
-  | { kind: 'done'; answer: RowAnswer | OutageAnswer }
+  | { kind: 'done'; answer: RowAnswer | OutageAnswer | CompareAnswer }
   | { kind: 'failed'; message: string };

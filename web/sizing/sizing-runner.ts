@@ -1,4 +1,4 @@
-import type { OutageAnswer, RowAnswer, SizingJob, SizingMessage } from './sizing-protocol';
+import type { CompareAnswer, CompareJob, OutageAnswer, RowAnswer, SizeJob, SizingJob, SizingMessage } from './sizing-protocol';
 
 /**
  * Runs one sizing job at a time in its own worker: a new job or `cancel()`
@@ -11,7 +11,9 @@ export class SizingRunner {
    * Starts `job`; resolves with its answer.
    * @throws Error with the engine's message, or "cancelled" when a newer job or cancel() ended it.
    */
-  run(job: SizingJob, onProgress: (done: number, total: number) => void): Promise<RowAnswer | OutageAnswer> {
+  run(job: CompareJob, onProgress: (done: number, total: number) => void): Promise<CompareAnswer>;
+  run(job: SizeJob, onProgress: (done: number, total: number) => void): Promise<RowAnswer | OutageAnswer>;
+  run(job: SizingJob, onProgress: (done: number, total: number) => void): Promise<RowAnswer | OutageAnswer | CompareAnswer> {
     this.cancel();
     const worker = new Worker(new URL('./sizing-worker.ts', import.meta.url), { type: 'module' });
     this.worker = worker;

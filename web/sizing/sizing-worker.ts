@@ -1,10 +1,10 @@
 // The sizing worker: bisections and sweeps are tens of full covariance runs,
 // so they run here, off the page's thread, with progress after every run.
 import {
-  evaluateBudgetDocument, longestOutage, requirementsWithOutage, outageSpan, sizeSource, sweepRow, sweepValues,
+  compareCandidates, evaluateBudgetDocument, longestOutage, requirementsWithOutage, outageSpan, sizeSource, sweepRow, sweepValues,
   SigmaLedgerError, type BudgetInput,
 } from '../../src/index';
-import type { OutageAnswer, RowAnswer, SizingJob, SizingMessage } from './sizing-protocol';
+import type { CompareAnswer, CompareJob, OutageAnswer, RowAnswer, SizingJob, SizingMessage } from './sizing-protocol';
 
 const post = (m: SizingMessage) => self.postMessage(m);
 
@@ -55,10 +55,15 @@ function sizeOutage(job: Extract<SizingJob, { kind: 'outage' }>): OutageAnswer {
   };
 }
 
+function compare(job: CompareJob): CompareAnswer {
+  const comparison = compareCandidates(job.document, { onRun: (done, total) => post({ kind: 'progress', done, total }) });
+  return { kind: 'compare', comparison };
+}
+
 self.onmessage = (event: MessageEvent<SizingJob>) => {
   const job = event.data;
   try {
-    post({ kind: 'done', answer: job.kind === 'row' ? sizeRow(job) : sizeOutage(job) });
+    post({ kind: 'done', answer: job.kind === 'row' ? sizeRow(job) : job.kind === 'outage' ? sizeOutage(job) : compare(job) });
   } catch (e) {
     post({ kind: 'failed', message: e instanceof SigmaLedgerError ? e.message : `unexpected failure: ${e instanceof Error ? e.message : String(e)}` });
   }

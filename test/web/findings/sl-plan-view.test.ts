@@ -30,6 +30,21 @@ describe('the plan view', () => {
     expect(el.shadowRoot!.querySelector('ul')!.textContent).to.contain('driven while gnss is out');
   });
 
+  it('puts outage labels clear of each other and of the track, each example', async () => {
+    for (const i of [ORCHARD, WAREHOUSE]) {
+      const el = await planOf(i);
+      const svgEl = el.shadowRoot!.querySelector('svg')!;
+      const boxes = [...el.shadowRoot!.querySelectorAll<SVGTextElement>('text.outage-label')].map((t) => t.getBBox());
+      const track = el.shadowRoot!.querySelector('polyline.path')!.getAttribute('points')!.split(' ').map((p) => p.split(',').map(Number));
+      boxes.forEach((a, k) => {
+        for (const b of boxes.slice(k + 1)) expect(a.y + a.height <= b.y + 0.5 || b.y + b.height <= a.y + 0.5 || a.x + a.width <= b.x || b.x + b.width <= a.x, 'labels overlap').to.equal(true);
+        const hit = track.some(([x, y]) => x >= a.x && x <= a.x + a.width && y >= a.y && y <= a.y + a.height);
+        expect(hit, `label over the track in example ${i}`).to.equal(false);
+        expect(a.x + a.width).to.be.at.most(svgEl.viewBox.baseVal.width);
+      });
+    }
+  });
+
   it('has a scale bar in metres and a north arrow', async () => {
     const el = await planOf(WAREHOUSE);
     expect(el.shadowRoot!.querySelector('.scale-bar text')!.textContent).to.match(/^\d+(\.\d+)? m$/);

@@ -87,3 +87,19 @@ export function clipboardEvent(type: 'paste' | 'copy', text = ''): ClipboardEven
   if (text) data.setData('text/plain', text);
   return new ClipboardEvent(type, { clipboardData: data, bubbles: true, composed: true, cancelable: true });
 }
+
+/** Clicks the button whose text is `text` inside `root`'s shadow tree. */
+export async function clickButton(el: Element, host: string, text: string): Promise<void> {
+  const button = deepQueryAll<HTMLButtonElement>(deepQuery(el, host).shadowRoot!, 'button').find((b) => b.textContent!.trim() === text);
+  if (!button) throw new Error(`no button "${text}" in ${host}`);
+  button.click();
+  await settle(el);
+}
+
+/** Picks `value` in the select with accessible name `label`. */
+export async function choose(el: Element, label: string, value: string): Promise<void> {
+  const select = deepQuery<HTMLSelectElement>(el, `select[aria-label="${label}"]`);
+  select.value = value;
+  select.dispatchEvent(new Event('change', { bubbles: true }));
+  await settle(el);
+}

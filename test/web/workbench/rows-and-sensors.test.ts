@@ -1,22 +1,6 @@
 import { expect } from '@open-wc/testing';
 import { ASSUMED_CORRELATION_TIME_S } from '../../../web/grid/row-edits';
-import { cell, deepQuery, deepQueryAll, settle, workbench } from './helpers';
-
-/** Clicks the button whose text is `text` inside `root`'s shadow tree. */
-async function clickButton(el: Element, host: string, text: string): Promise<void> {
-  const button = deepQueryAll<HTMLButtonElement>(deepQuery(el, host).shadowRoot!, 'button').find((b) => b.textContent!.trim() === text);
-  if (!button) throw new Error(`no button "${text}" in ${host}`);
-  button.click();
-  await settle(el);
-}
-
-/** Picks `value` in the select with accessible name `label`. */
-async function choose(el: Element, label: string, value: string): Promise<void> {
-  const select = deepQuery<HTMLSelectElement>(el, `select[aria-label="${label}"]`);
-  select.value = value;
-  select.dispatchEvent(new Event('change', { bubbles: true }));
-  await settle(el);
-}
+import { cell, choose, clickButton, deepQuery, settle, workbench } from './helpers';
 
 describe('adding, moving and removing rows and sensors', () => {
   it('a new bias-instability row gets a 100 s correlation time marked assumed, with a provenance saying so', async () => {
