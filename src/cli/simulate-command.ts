@@ -96,17 +96,18 @@ export async function simulateCommand(opts: SimulateOptions, io: Io): Promise<nu
     const [firstBlock, endBlock] = opts.shard ? shardBlocks(opts.runs, opts.shard.index, opts.shard.count) : [0, blockCount(opts.runs)];
     const total = Math.max(0, Math.min(opts.runs, endBlock * 64) - firstBlock * 64);
     const started = Date.now();
-    let done = 0, shownMs = 0;
+    let done = 0, shownMs = started;
     const progress = (runs: number) => {
       done += runs;
-      // At most four progress lines a second (each overwrites the last on a terminal).
-      if (Date.now() - shownMs < 250 && done < total) return;
+      // One progress line every 2 s, each on its own line: stderr is escaped for the terminal
+      // (terminal-text.ts), so a carriage return would print as \u000d, and logs of cluster jobs keep every line.
+      if (Date.now() - shownMs < 2000 || done >= total) return;
       shownMs = Date.now();
       const rate = done / Math.max(1e-3, (Date.now() - started) / 1000);
-      io.err(`\rsimulate: ${done}/${total} runs (${Math.round((100 * done) / Math.max(1, total))} %), ${rate.toFixed(1)} runs/s`);
+      io.err(`simulate: ${done}/${total} runs (${Math.round((100 * done) / Math.max(1, total))} %), ${rate.toFixed(1)} runs/s\n`);
     };
     const nodes = await simulateInParallel(opts.file, model, { seed: opts.seed, runs: opts.runs, firstBlock, endBlock }, opts.workers, progress);
-    io.err(`\rsimulate: ${done}/${total} runs in ${((Date.now() - started) / 1000).toFixed(1)} s\n`);
+    io.err(`simulate: ${done}/${total} runs in ${((Date.now() - started) / 1000).toFixed(1)} s\n`);
     const id = studyIdentity(opts.file, opts.seed, opts.runs);
     if (opts.shard) {
       const path = opts.output ?? `simulation-part-${opts.shard.index}-of-${opts.shard.count}.json`;
