@@ -15,6 +15,7 @@ import { loadBudget, sheetProblems, withDocumentPaths } from './load-budget';
 import { simulateInParallel } from './parallel-blocks';
 import { finishStudy } from './simulation-output';
 import { studyIdentity, writePart } from './simulation-parts';
+import { parseShard, type ShardSelection } from './shard-option';
 
 /** The options `simulate` adds (besides --json, --every and --output, which main.ts has). */
 export const SIMULATE_CLI_OPTIONS = {
@@ -30,7 +31,7 @@ export interface SimulateOptions {
   runs: number;
   seed: number;
   /** Only this shard (0-based index of count) and write a part file. */
-  shard?: { index: number; count: number };
+  shard?: ShardSelection;
   workers: number;
   json: boolean;
   every: number;
@@ -41,9 +42,8 @@ export interface SimulateOptions {
 const MAX_RUNS = 100_000_000;
 
 /**
- * Parses the command line's values. `--shard auto/N` takes the index from
- * JOB_COMPLETION_INDEX (Kubernetes Indexed Jobs) or SLURM_ARRAY_TASK_ID
- * (Slurm job arrays, counted from SLURM_ARRAY_TASK_MIN).
+ * Parses the command line's values (--shard by shard-option.ts, which reads
+ * `auto/N` from a Kubernetes or Slurm job array).
  * @throws InputError naming the option.
  */
 export function simulateOptionsFromArgs(file: string, values: Record<string, unknown>, env: Record<string, string | undefined>): SimulateOptions {
@@ -66,21 +66,6 @@ export function simulateOptionsFromArgs(file: string, values: Record<string, unk
     every: int('every', 1, 1, 1e9),
     output: typeof values.output === 'string' ? values.output : undefined,
   };
-}
-
-function parseShard(text: string, env: Record<string, string | undefined>): { index: number; count: number } {
-  const m = /^(auto|\d+)\/(\d+)$/.exec(text);
-  if (!m) throw new InputError('--shard', `must be INDEX/COUNT (0-based, e.g. 3/100) or auto/COUNT, got "${text}"`);
-  const count = Number(m[2]);
-  let index: number;
-  if (m[1] !== 'auto') index = Number(m[1]);
-  else if (env.JOB_COMPLETION_INDEX !== undefined) index = Number(env.JOB_COMPLETION_INDEX);
-  else if (env.SLURM_ARRAY_TASK_ID !== undefined) index = Number(env.SLURM_ARRAY_TASK_ID) - Number(env.SLURM_ARRAY_TASK_MIN ?? 0);
-  else throw new InputError('--shard', 'auto needs JOB_COMPLETION_INDEX (Kubernetes Indexed Job) or SLURM_ARRAY_TASK_ID (Slurm array) in the environment');
-  if (!(count >= 1) || !Number.isInteger(index) || index < 0 || index >= count) {
-    throw new InputError('--shard', `index ${index} is not in 0 to ${count - 1}`);
-  }
-  return { index, count };
 }
 
 /** Runs `simulate`: exit 0 when consistent within bounds (or a part was written), 1 with warnings, 2 for bad input. */
