@@ -17,6 +17,7 @@ import { noiseSection } from './sections/noise-section';
 import { calibrationSection } from './sections/calibration-section';
 import { assumedSection } from './sections/assumed-section';
 import { rerunSection } from './sections/rerun-section';
+import { monteCarloSection } from './sections/monte-carlo-section';
 
 /** Builds one section from the context; undefined leaves it out. */
 export type SectionBuilder = (ctx: ReviewContext) => ReportSection | undefined;
@@ -28,6 +29,7 @@ export const REVIEW_SECTIONS: readonly SectionBuilder[] = [
   sigmaChartsSection,
   checkpointsSection,
   sizingSection,
+  monteCarloSection,
   modelSection,
   sensorRowsSection,
   noiseSection,
