@@ -97,3 +97,8 @@ export { ALLAN_SENSOR_KINDS, SENSOR_TERM_UNITS, type AllanSensorKind } from './a
 export { calibrationReport, checkCalibrationUnit, type CalibrationReport } from './calibration/calibration-report';
 export { fitOffsetAndScaleFactor } from './calibration/linear-calibration';
 export { checkResidualWhiteness } from './calibration/residual-whiteness';
+
+// The Monte Carlo check's plain-data model shape, its JSON and its reader (the page's workers, report --simulation).
+export type { StudyShape } from './simulation/monte-carlo-model';
+export { readSimulationJson, type SimulationJson } from './simulation/simulation-json';
+export type { StudySums } from './simulation/study-sums';
