@@ -102,3 +102,5 @@ export { checkResidualWhiteness } from './calibration/residual-whiteness';
 export type { StudyShape } from './simulation/monte-carlo-model';
 export { readSimulationJson, type SimulationJson } from './simulation/simulation-json';
 export type { StudySums } from './simulation/study-sums';
+export { inertialSimulation, InertialSimulation } from './inertial/monte-carlo/inertial-simulation';
+

@@ -8,10 +8,10 @@ import { availableParallelism } from 'node:os';
 import { writeFileSync } from 'node:fs';
 import { InputError } from '../errors';
 import { blockCount, reduceNodes, shardBlocks } from '../simulation/block-tree';
-import { planarSimulation } from '../simulation/planar-study';
 import { sumLayout } from '../simulation/study-sums';
 import { EXIT, exitOnInputError, type Io } from './commands';
-import { loadBudget, sheetProblems, withDocumentPaths } from './load-budget';
+import { loadBudget, sheetProblems } from './load-budget';
+import { simulationModelFor } from './simulation-model';
 import { simulateInParallel } from './parallel-blocks';
 import { finishStudy } from './simulation-output';
 import { studyIdentity, writePart } from './simulation-parts';
@@ -77,7 +77,7 @@ export async function simulateCommand(opts: SimulateOptions, io: Io): Promise<nu
       for (const p of problems) io.err(`${p}\n`);
       throw new InputError(opts.file, 'a budget with cell errors cannot be simulated; fix the cells first');
     }
-    const model = withDocumentPaths(loaded, (input) => planarSimulation(input));
+    const model = simulationModelFor(loaded);
     const [firstBlock, endBlock] = opts.shard ? shardBlocks(opts.runs, opts.shard.index, opts.shard.count) : [0, blockCount(opts.runs)];
     const total = Math.max(0, Math.min(opts.runs, endBlock * 64) - firstBlock * 64);
     const started = Date.now();

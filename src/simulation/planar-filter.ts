@@ -1,4 +1,4 @@
-import { josephUpdateInPlace, multiplySparseVector } from '../covariance/covariance-kernels';
+import { scalarJosephUpdate } from './scalar-joseph-update';
 import { propagationKernel, type PropagationKernel } from '../covariance/compiled-propagation';
 import { reachability, toSparseRows, type SparseRows } from '../covariance/sparse-rows';
 import type { PlanarPlan } from './planar-plan';
@@ -128,14 +128,7 @@ export class PlanarFilter {
    * (and P unchanged) when it is not positive.
    */
   update(hIdx: Int32Array, hVal: Float64Array, count: number, r: number): number {
-    const { n, p, u, gain } = this;
-    const idx = hIdx.subarray(0, count), val = hVal.subarray(0, count);
-    const hph = multiplySparseVector(p, 0, n, idx, val, u);
-    const s = hph + r;
-    if (!(s > 0) || !Number.isFinite(s)) return 0;
-    for (let i = 0; i < n; i++) gain[i] = u[i] / s;
-    josephUpdateInPlace(p, 0, n, gain, u, hph, r);
-    return s;
+    return scalarJosephUpdate(this.p, this.n, hIdx.subarray(0, count), hVal.subarray(0, count), r, this.u, this.gain);
   }
 
   /**
