@@ -15,7 +15,7 @@ import { checkShardsComplete } from './shard-option';
 import { sweepCsv } from './size-sweep';
 import { joinSweepParts, readPartJson, sweepPartFromJson, SWEEP_PART_FORMAT } from './sweep-parts';
 import { loadBudget } from './load-budget';
-import { simulationModelFor } from './simulation-model';
+import { simulationModelFor, SIMULATION_LOAD } from './simulation-model';
 import { finishStudy } from './simulation-output';
 import { readPart, studyIdentity } from './simulation-parts';
 
@@ -35,7 +35,7 @@ export async function mergeCommand(parts: string[], opts: { json: boolean; every
     if (id.budget.sha256 !== first.id.budget.sha256) {
       throw new InputError(first.id.budget.file, 'has changed since the parts were simulated (its SHA-256 differs); simulate again');
     }
-    const model = simulationModelFor(loadBudget(id.budget.file));
+    const model = simulationModelFor(loadBudget(id.budget.file, SIMULATION_LOAD));
     const fields = sumLayout(model).fields;
     const size = sumLayout(model).steps * fields;
     const bad = read.find(({ part }) => part.fieldsPerStep !== fields || part.nodes.some((n) => n.sums.data.length !== size));

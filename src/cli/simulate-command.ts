@@ -11,7 +11,7 @@ import { blockCount, reduceNodes, shardBlocks } from '../simulation/block-tree';
 import { sumLayout } from '../simulation/study-sums';
 import { EXIT, exitOnInputError, type Io } from './commands';
 import { loadBudget, sheetProblems } from './load-budget';
-import { simulationModelFor } from './simulation-model';
+import { simulationModelFor, SIMULATION_LOAD } from './simulation-model';
 import { simulateInParallel } from './parallel-blocks';
 import { finishStudy } from './simulation-output';
 import { studyIdentity, writePart } from './simulation-parts';
@@ -71,7 +71,7 @@ export function simulateOptionsFromArgs(file: string, values: Record<string, unk
 /** Runs `simulate`: exit 0 when consistent within bounds (or a part was written), 1 with warnings, 2 for bad input. */
 export async function simulateCommand(opts: SimulateOptions, io: Io): Promise<number> {
   return exitOnInputError(io, async () => {
-    const loaded = loadBudget(opts.file);
+    const loaded = loadBudget(opts.file, SIMULATION_LOAD);
     const problems = sheetProblems(loaded);
     if (problems.length) {
       for (const p of problems) io.err(`${p}\n`);

@@ -6,7 +6,7 @@
 import { parentPort, workerData } from 'node:worker_threads';
 import { runBlocks, type BlockRange } from '../simulation/run-blocks';
 import { loadBudget } from './load-budget';
-import { simulationModelFor } from './simulation-model';
+import { simulationModelFor, SIMULATION_LOAD } from './simulation-model';
 
 /** What the main thread sends a worker. */
 export interface WorkerJob extends BlockRange {
@@ -16,7 +16,7 @@ export interface WorkerJob extends BlockRange {
 const PROGRESS_EVERY_RUNS = 4;
 
 const job = workerData as WorkerJob;
-const loaded = loadBudget(job.file);
+const loaded = loadBudget(job.file, SIMULATION_LOAD);
 const model = simulationModelFor(loaded);
 let done = 0;
 const nodes = runBlocks(model, job, () => {

@@ -9,6 +9,13 @@ import { planarSimulation } from '../simulation/planar-study';
 import { withDocumentPaths, type LoadedBudget } from './load-budget';
 
 /**
+ * How the simulation loads a budget: the sheet and its input only (the model
+ * runs its own totals-only analysis), without per-source contributions or a
+ * JSON report that nothing would read.
+ */
+export const SIMULATION_LOAD = { contributions: false, report: false } as const;
+
+/**
  * The Monte Carlo model of a loaded budget: the 3-D model
  * (inertialSimulation, docs/inertial-model.md §10) when {@link inertialInputOf}
  * finds a 3-D budget, the planar model otherwise.
