@@ -120,3 +120,9 @@ export { inertialLimitDimension } from './budget/inertial-requirements';
 // Comparing candidate rows for a sensor (src/compare/) and grade presets to start a sensor from.
 export * from './compare';
 export { GRADE_PRESETS, presetRows, presetsFor, type GradePreset, type AcceptedRows } from './presets/grade-presets';
+// The Monte Carlo check's plain-data model shape, its JSON and its reader (the page's workers, report --simulation).
+export type { StudyShape } from './simulation/monte-carlo-model';
+export { readSimulationJson, type SimulationJson } from './simulation/simulation-json';
+export type { StudySums } from './simulation/study-sums';
+export { inertialSimulation, InertialSimulation } from './inertial/monte-carlo/inertial-simulation';
+

@@ -9,6 +9,7 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import { InputError } from '../errors';
 import { buildReviewReport, renderReviewHtml, renderReviewMarkdown, TOOL_VERSION } from '../report/review';
 import { EXIT, type Io } from './commands';
+import { readSimulationJson, type SimulationJson } from '../simulation/simulation-json';
 import { loadBudget, sheetProblems, withDocumentPaths } from './load-budget';
 
 /** The report's file formats. */
@@ -19,6 +20,7 @@ export type ReportFormat = (typeof REPORT_FORMATS)[number];
 export const REPORT_CLI_OPTIONS = {
   out: { type: 'string' },
   format: { type: 'string' },
+  simulation: { type: 'string' },
 } as const;
 
 /** Options of `report`. */
@@ -26,6 +28,8 @@ export interface ReportCommandOptions {
   file: string;
   out?: string;
   format: ReportFormat;
+  /** A Monte Carlo study of the same file (simulate --json or merge --json) to show in the report. */
+  simulation?: string;
 }
 
 /**
@@ -33,10 +37,10 @@ export interface ReportCommandOptions {
  * ending in .md, HTML otherwise.
  * @throws InputError at --format for a format other than html or md.
  */
-export function reportOptionsFromArgs(file: string, values: { out?: string; format?: string }): ReportCommandOptions {
+export function reportOptionsFromArgs(file: string, values: { out?: string; format?: string; simulation?: string }): ReportCommandOptions {
   const format = values.format ?? (values.out?.toLowerCase().endsWith('.md') ? 'md' : 'html');
   if (!(REPORT_FORMATS as readonly string[]).includes(format)) throw new InputError('--format', `must be html or md, got "${format}"`);
-  return { file, out: values.out, format: format as ReportFormat };
+  return { file, out: values.out, format: format as ReportFormat, simulation: values.simulation };
 }
 
 /** Writes the report; returns 0 when every requirement holds, 1 when some fails, 2 for a partial budget. */
@@ -47,7 +51,9 @@ export function reportCommand(opts: ReportCommandOptions, io: Io): number {
   for (const p of problems) io.err(`${p}\n`);
   if (loaded.sheet.blocked) return EXIT.badInput;
   const documentSha256 = createHash('sha256').update(readFileSync(opts.file)).digest('hex');
-  const report = withDocumentPaths(loaded, () => buildReviewReport(loaded.document, { fileName: opts.file, documentSha256, toolVersion: TOOL_VERSION }));
+  const simulation = opts.simulation === undefined ? undefined : readStudyFor(opts.simulation, documentSha256);
+  const provenance = { fileName: opts.file, documentSha256, toolVersion: TOOL_VERSION, simulation };
+  const report = withDocumentPaths(loaded, () => buildReviewReport(loaded.document, provenance));
   const text = opts.format === 'md' ? renderReviewMarkdown(report) : renderReviewHtml(report);
   if (opts.out) {
     try {
@@ -66,4 +72,23 @@ export function reportCommand(opts: ReportCommandOptions, io: Io): number {
 function verdictsHold(report: ReturnType<typeof buildReviewReport>): boolean {
   const verdicts = report.sections.find((s) => s.id === 'requirements')?.blocks.find((b) => b.kind === 'table' && b.id === 'verdicts');
   return !verdicts || verdicts.kind !== 'table' || verdicts.rows.every((r) => r[r.length - 1] === 'PASS');
+}
+
+/**
+ * Reads a Monte Carlo study (simulate --json) and checks it was simulated from these very bytes.
+ * @throws InputError at --simulation for an unreadable file, another format or another budget.
+ */
+function readStudyFor(path: string, documentSha256: string): SimulationJson {
+  let raw: unknown;
+  try {
+    raw = JSON.parse(readFileSync(path, 'utf8'));
+  } catch (e) {
+    const why = e instanceof SyntaxError ? 'is not JSON' : `cannot be read (${(e as NodeJS.ErrnoException).code ?? 'error'})`;
+    throw new InputError(`--simulation ${path}`, `${why}; give the output of simulate --json or merge --json`);
+  }
+  const study = readSimulationJson(raw, path);
+  if (study.budget.sha256 !== documentSha256) {
+    throw new InputError(`--simulation ${path}`, `was simulated from another version of the budget (SHA-256 ${study.budget.sha256.slice(0, 12)}…, this file ${documentSha256.slice(0, 12)}…): simulate again`);
+  }
+  return study;
 }

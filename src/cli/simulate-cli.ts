@@ -3,6 +3,7 @@ import { simulateCommand, simulateOptionsFromArgs } from './simulate-command';
 import { mergeCommand } from './merge-command';
 import { EVERY_OPTION, JSON_OPTION, OUTPUT_OPTION, textOption, type CliCommand, type CliOption } from './cli-command';
 import { positiveOption } from './number-options';
+import { SHARD_HELP } from './shard-option';
 
 const OUTPUT_OPTIONS: Record<string, CliOption> = { ...JSON_OPTION, ...EVERY_OPTION, ...OUTPUT_OPTION };
 
@@ -18,7 +19,7 @@ export const SIMULATE_COMMAND: CliCommand = {
     runs: { type: 'string', value: 'N', help: 'number of runs' },
     seed: { type: 'string', value: 'S', help: 'the study seed (default 1); run i replays from (S, i) alone' },
     workers: { type: 'string', value: 'N', help: 'worker threads (default: the number of cores)' },
-    shard: { type: 'string', value: 'I/N', help: 'run only shard I of N and write a part file' },
+    shard: { type: 'string', value: 'I/N', help: SHARD_HELP },
     ...OUTPUT_OPTIONS,
   },
   run: ([file], values, io) => simulateCommand(simulateOptionsFromArgs(file, values, process.env), io),
@@ -28,7 +29,7 @@ export const MERGE_COMMAND: CliCommand = {
   operands: [],
   variadic: 'PARTS...',
   synopsis: 'PARTS... [--json] [--every N] [--output OUT]',
-  description: 'combines the part files of a sharded simulate into exactly the one-machine result',
+  description: 'combines the part files of a sharded simulate (or size --sweep) into exactly the one-machine result',
   options: OUTPUT_OPTIONS,
   run: (parts, values, io) => mergeCommand([...parts], { json: values.json === true, every: positiveOption(values, 'every', 1), output: textOption(values, 'output') }, io),
 };

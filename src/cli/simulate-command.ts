@@ -8,13 +8,14 @@ import { availableParallelism } from 'node:os';
 import { writeFileSync } from 'node:fs';
 import { InputError } from '../errors';
 import { blockCount, reduceNodes, shardBlocks } from '../simulation/block-tree';
-import { planarSimulation } from '../simulation/planar-study';
 import { sumLayout } from '../simulation/study-sums';
 import { EXIT, exitOnInputError, type Io } from './commands';
-import { loadBudget, sheetProblems, withDocumentPaths } from './load-budget';
+import { loadBudget, sheetProblems } from './load-budget';
+import { simulationModelFor, SIMULATION_LOAD } from './simulation-model';
 import { simulateInParallel } from './parallel-blocks';
 import { finishStudy } from './simulation-output';
 import { studyIdentity, writePart } from './simulation-parts';
+import { parseShard, type ShardSelection } from './shard-option';
 
 /** The options `simulate` adds (besides --json, --every and --output, which main.ts has). */
 export const SIMULATE_CLI_OPTIONS = {
@@ -30,7 +31,7 @@ export interface SimulateOptions {
   runs: number;
   seed: number;
   /** Only this shard (0-based index of count) and write a part file. */
-  shard?: { index: number; count: number };
+  shard?: ShardSelection;
   workers: number;
   json: boolean;
   every: number;
@@ -41,9 +42,8 @@ export interface SimulateOptions {
 const MAX_RUNS = 100_000_000;
 
 /**
- * Parses the command line's values. `--shard auto/N` takes the index from
- * JOB_COMPLETION_INDEX (Kubernetes Indexed Jobs) or SLURM_ARRAY_TASK_ID
- * (Slurm job arrays, counted from SLURM_ARRAY_TASK_MIN).
+ * Parses the command line's values (--shard by shard-option.ts, which reads
+ * `auto/N` from a Kubernetes or Slurm job array).
  * @throws InputError naming the option.
  */
 export function simulateOptionsFromArgs(file: string, values: Record<string, unknown>, env: Record<string, string | undefined>): SimulateOptions {
@@ -68,45 +68,31 @@ export function simulateOptionsFromArgs(file: string, values: Record<string, unk
   };
 }
 
-function parseShard(text: string, env: Record<string, string | undefined>): { index: number; count: number } {
-  const m = /^(auto|\d+)\/(\d+)$/.exec(text);
-  if (!m) throw new InputError('--shard', `must be INDEX/COUNT (0-based, e.g. 3/100) or auto/COUNT, got "${text}"`);
-  const count = Number(m[2]);
-  let index: number;
-  if (m[1] !== 'auto') index = Number(m[1]);
-  else if (env.JOB_COMPLETION_INDEX !== undefined) index = Number(env.JOB_COMPLETION_INDEX);
-  else if (env.SLURM_ARRAY_TASK_ID !== undefined) index = Number(env.SLURM_ARRAY_TASK_ID) - Number(env.SLURM_ARRAY_TASK_MIN ?? 0);
-  else throw new InputError('--shard', 'auto needs JOB_COMPLETION_INDEX (Kubernetes Indexed Job) or SLURM_ARRAY_TASK_ID (Slurm array) in the environment');
-  if (!(count >= 1) || !Number.isInteger(index) || index < 0 || index >= count) {
-    throw new InputError('--shard', `index ${index} is not in 0 to ${count - 1}`);
-  }
-  return { index, count };
-}
-
 /** Runs `simulate`: exit 0 when consistent within bounds (or a part was written), 1 with warnings, 2 for bad input. */
 export async function simulateCommand(opts: SimulateOptions, io: Io): Promise<number> {
   return exitOnInputError(io, async () => {
-    const loaded = loadBudget(opts.file);
+    const loaded = loadBudget(opts.file, SIMULATION_LOAD);
     const problems = sheetProblems(loaded);
     if (problems.length) {
       for (const p of problems) io.err(`${p}\n`);
       throw new InputError(opts.file, 'a budget with cell errors cannot be simulated; fix the cells first');
     }
-    const model = withDocumentPaths(loaded, (input) => planarSimulation(input));
+    const model = simulationModelFor(loaded);
     const [firstBlock, endBlock] = opts.shard ? shardBlocks(opts.runs, opts.shard.index, opts.shard.count) : [0, blockCount(opts.runs)];
     const total = Math.max(0, Math.min(opts.runs, endBlock * 64) - firstBlock * 64);
     const started = Date.now();
-    let done = 0, shownMs = 0;
+    let done = 0, shownMs = started;
     const progress = (runs: number) => {
       done += runs;
-      // At most four progress lines a second (each overwrites the last on a terminal).
-      if (Date.now() - shownMs < 250 && done < total) return;
+      // One progress line every 2 s, each on its own line: stderr is escaped for the terminal
+      // (terminal-text.ts), so a carriage return would print as \u000d, and logs of cluster jobs keep every line.
+      if (Date.now() - shownMs < 2000 || done >= total) return;
       shownMs = Date.now();
       const rate = done / Math.max(1e-3, (Date.now() - started) / 1000);
-      io.err(`\rsimulate: ${done}/${total} runs (${Math.round((100 * done) / Math.max(1, total))} %), ${rate.toFixed(1)} runs/s`);
+      io.err(`simulate: ${done}/${total} runs (${Math.round((100 * done) / Math.max(1, total))} %), ${rate.toFixed(1)} runs/s\n`);
     };
     const nodes = await simulateInParallel(opts.file, model, { seed: opts.seed, runs: opts.runs, firstBlock, endBlock }, opts.workers, progress);
-    io.err(`\rsimulate: ${done}/${total} runs in ${((Date.now() - started) / 1000).toFixed(1)} s\n`);
+    io.err(`simulate: ${done}/${total} runs in ${((Date.now() - started) / 1000).toFixed(1)} s\n`);
     const id = studyIdentity(opts.file, opts.seed, opts.runs);
     if (opts.shard) {
       const path = opts.output ?? `simulation-part-${opts.shard.index}-of-${opts.shard.count}.json`;

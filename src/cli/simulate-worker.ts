@@ -5,8 +5,8 @@
  */
 import { parentPort, workerData } from 'node:worker_threads';
 import { runBlocks, type BlockRange } from '../simulation/run-blocks';
-import { planarSimulation } from '../simulation/planar-study';
-import { loadBudget, withDocumentPaths } from './load-budget';
+import { loadBudget } from './load-budget';
+import { simulationModelFor, SIMULATION_LOAD } from './simulation-model';
 
 /** What the main thread sends a worker. */
 export interface WorkerJob extends BlockRange {
@@ -16,8 +16,8 @@ export interface WorkerJob extends BlockRange {
 const PROGRESS_EVERY_RUNS = 4;
 
 const job = workerData as WorkerJob;
-const loaded = loadBudget(job.file);
-const model = withDocumentPaths(loaded, (input) => planarSimulation(input));
+const loaded = loadBudget(job.file, SIMULATION_LOAD);
+const model = simulationModelFor(loaded);
 let done = 0;
 const nodes = runBlocks(model, job, () => {
   if (++done % PROGRESS_EVERY_RUNS === 0) parentPort!.postMessage({ kind: 'progress', runs: PROGRESS_EVERY_RUNS });

@@ -17,7 +17,12 @@ const FORMAT = 'sigma-ledger-simulation-part';
 
 /** The identity of a study of this budget file (its bytes' SHA-256), seed and run count. */
 export function studyIdentity(file: string, seed: number, runs: number): StudyIdentity {
-  return { budget: { file, sha256: createHash('sha256').update(readFileSync(file)).digest('hex') }, seed, runs };
+  return { budget: { file, sha256: fileSha256(file) }, seed, runs };
+}
+
+/** SHA-256 of a file's bytes, hex (what part files identify their budget by). */
+export function fileSha256(file: string): string {
+  return createHash('sha256').update(readFileSync(file)).digest('hex');
 }
 
 /** Writes a part as JSON; each node's sums go in as base64 of their little-endian doubles. */

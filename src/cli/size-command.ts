@@ -8,6 +8,7 @@ import { loadAnyBudget, reportProblems, withDocumentPaths, withInertialDocumentP
 import { positiveOption } from './number-options';
 import { checkSizingTarget } from './sizing-target';
 import { sizeSweepCommand } from './size-sweep';
+import { parseShard, SHARD_HELP } from './shard-option';
 import { formatToTolerance } from '../report/tolerance-text';
 
 /** Runs `size`; returns the exit code (1 when the requirement fails even with the row at zero). @throws SigmaLedgerError for bad input. */
@@ -53,20 +54,25 @@ function formatSizing(r: SizingResult): string {
 
 export const SIZE_COMMAND: CliCommand = {
   operands: ['FILE'],
-  synopsis: '--requirement ID --vary SENSOR.ROW [--tolerance REL] [--json]\n      | --vary SENSOR.ROW --sweep FROM:TO:N [--requirement ID]',
+  synopsis: '--requirement ID --vary SENSOR.ROW [--tolerance REL] [--json]\n      | --vary SENSOR.ROW --sweep FROM:TO:N [--requirement ID] [--shard I/N [--output PART]]',
   description: "the largest value of one row's magnitude that still meets a requirement,\nby bisection; each trial is reported on stderr",
   options: {
     requirement: { type: 'string', value: 'ID', help: 'the requirement to meet' },
     vary: { type: 'string', value: 'SENSOR.ROW', help: 'the row whose magnitude is sized, e.g. gyro.arw' },
     tolerance: { type: 'string', value: 'REL', help: 'relative width of the answer (default 0.001)' },
     sweep: { type: 'string', value: 'FROM:TO:N', help: "instead of sizing, print each requirement's worst value at N values of the row as CSV" },
+    shard: { type: 'string', value: 'I/N', help: `with --sweep: ${SHARD_HELP}` },
+    output: { type: 'string', value: 'OUT', help: 'with --shard: the part file to write (default sweep-part-I-of-N.json)' },
     ...JSON_OPTION,
   },
   run: ([file], values, io) => {
     const requirement = textOption(values, 'requirement');
     const vary = textOption(values, 'vary');
     const sweep = textOption(values, 'sweep');
-    if (sweep !== undefined && vary) return sizeSweepCommand(file, vary, requirement, sweep, io);
+    const shardText = textOption(values, 'shard');
+    if (shardText !== undefined && sweep === undefined) throw new UsageError('size --shard splits a sweep: give --sweep FROM:TO:N too');
+    const sharded = shardText === undefined ? undefined : { shard: parseShard(shardText, process.env), output: textOption(values, 'output') };
+    if (sweep !== undefined && vary) return sizeSweepCommand(file, vary, requirement, sweep, io, sharded);
     if (!requirement || !vary) throw new UsageError('size needs --requirement ID and --vary SENSOR.ROW');
     return sizeCommand(file, requirement, vary, relativeTolerance(textOption(values, 'tolerance')), values.json === true, io);
   },

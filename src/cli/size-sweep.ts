@@ -11,6 +11,9 @@ import { formatSignificant } from '../units';
 import { EXIT, type Io } from './commands';
 import { loadBudget, sheetProblems, withDocumentPaths } from './load-budget';
 import { checkSizingTarget } from './sizing-target';
+import { shardSlice, type ShardSelection } from './shard-option';
+import { fileSha256 } from './simulation-parts';
+import { writeSweepPart } from './sweep-parts';
 
 /** Options the sweep adds to the command line. */
 export const SIZE_SWEEP_CLI_OPTIONS = { sweep: { type: 'string' } } as const;
@@ -28,10 +31,25 @@ export function parseSweep(text: string): { from: number; to: number; n: number 
   return { from, to, n };
 }
 
-/** Prints the sweep as CSV; exits 0, or 2 for bad input. */
-export function sizeSweepCommand(file: string, rowId: string, requirementId: string | undefined, sweepText: string, io: Io): number {
+/** Where a sharded sweep writes its part (--shard, --output). */
+export interface SweepShardOptions {
+  shard: ShardSelection;
+  output?: string;
+}
+
+/**
+ * Prints the sweep as CSV; exits 0, or 2 for bad input. With `sharded` it
+ * computes only the shard's share of the values (shard-option.ts) and writes
+ * a part file for `merge`, which prints the same CSV as the whole sweep.
+ */
+export function sizeSweepCommand(
+  file: string, rowId: string, requirementId: string | undefined, sweepText: string, io: Io, sharded?: SweepShardOptions,
+): number {
   const { from, to, n } = parseSweep(sweepText);
-  const values = withSweepPath(() => sweepValues(from, to, n));
+  const allValues = withSweepPath(() => sweepValues(from, to, n));
+  if (sharded && file === '-') throw new InputError('--shard', 'needs a budget file (merge checks it by its SHA-256), not standard input');
+  const [firstPoint, endPoint] = sharded ? shardSlice(allValues.length, sharded.shard) : [0, allValues.length];
+  const values = allValues.slice(firstPoint, endPoint);
   const loaded = loadBudget(file);
   const problems = sheetProblems(loaded);
   for (const p of problems) io.err(`${p}\n`);
@@ -39,7 +57,15 @@ export function sizeSweepCommand(file: string, rowId: string, requirementId: str
   if (loaded.sheet.input) checkSizingTarget(loaded.sheet.input, rowId, requirementId);
   const sweep = withDocumentPaths(loaded, (input) =>
     sweepRow(input, rowId, values, requirementId === undefined ? undefined : [requirementId], (done, total) => io.err(`point ${done} of ${total}\n`)));
-  io.out(sweepCsv(sweep));
+  if (!sharded) {
+    io.out(sweepCsv(sweep));
+    return EXIT.pass;
+  }
+  const { shard } = sharded;
+  const path = sharded.output ?? `sweep-part-${shard.index}-of-${shard.count}.json`;
+  const id = { budget: { file, sha256: fileSha256(file) }, vary: rowId, sweep: sweepText, requirement: requirementId ?? null };
+  writeSweepPart(path, { id, shard, firstPoint, sweep });
+  io.err(`wrote ${path} (points ${firstPoint + 1} to ${endPoint} of ${allValues.length}); combine the parts with sigma-ledger merge\n`);
   return EXIT.pass;
 }
 

@@ -16,7 +16,7 @@ import { addRankOneQd, seriesVectors } from './rank-one-series';
  *
  * On a segment of constant speed with no turn, F changes only through the
  * latitude and height in the Earth-rate and transport-rate terms; those are
- * held at the segment's first step (docs/inertial-model.md §8 allows it), so
+ * held at the segment's first step (docs/inertial-model.md §10 allows it), so
  * one discretisation serves every full step of the segment. The effect on the
  * reference scenarios is below 1e-4 relative (tested against recomputing
  * every step). Turns and speed ramps are discretised at every step.

@@ -57,3 +57,9 @@ export interface MonteCarloModel {
    */
   simulate(rng: RunRandom, sink: RunSink): void;
 }
+
+/**
+ * What the statistics read of a model: everything but `simulate`. Plain data,
+ * so a worker that built the model can hand it to the thread that sums.
+ */
+export type StudyShape = Omit<MonteCarloModel, 'simulate'>;

@@ -1,4 +1,4 @@
-import { josephUpdateInPlace, multiplySparseVector } from '../covariance/covariance-kernels';
+import { scalarJosephUpdate } from './scalar-joseph-update';
 import { propagationKernel, type PropagationKernel } from '../covariance/compiled-propagation';
 import { reachability, toSparseRows, type SparseRows } from '../covariance/sparse-rows';
 import type { PlanarPlan } from './planar-plan';
@@ -21,6 +21,9 @@ export class PlanarFilter {
   private readonly n: number;
   private readonly fEntries: { i: number; j: number; c0: number; cv: number; cw: number }[];
   private readonly phiPattern: SparseRows;
+  /** Columns of F's pattern in each row, and rows of (F²)'s pattern in each column. */
+  private readonly aRowCols: Int32Array[];
+  private readonly a2ColRows: Int32Array[];
   /** States driven by white noise, with the rows of F that are non-zero in their column. */
   private readonly noiseColumns: { state: number; rows: number[] }[] = [];
   private readonly kernel: PropagationKernel;
@@ -48,6 +51,12 @@ export class PlanarFilter {
       if (plan.qcAlways[st] === 0 && plan.qcMoving[st] === 0) continue;
       this.noiseColumns.push({ state: st, rows: this.fEntries.filter((f) => f.j === st).map((f) => f.i) });
     }
+    this.aRowCols = Array.from({ length: n }, (_, i) => Int32Array.from(this.fEntries.filter((f) => f.i === i).map((f) => f.j)));
+    this.a2ColRows = Array.from({ length: n }, (_, j) => {
+      const rows: number[] = [];
+      for (let i = 0; i < n; i++) if (this.fEntries.some((f) => f.i === i && pattern[f.j * n + j] !== 0)) rows.push(i);
+      return Int32Array.from(rows);
+    });
     this.phiPattern = toSparseRows(new Float64Array(n * n), n, reachability(pattern, n), true);
     this.kernel = propagationKernel(this.phiPattern);
     this.a = new Float64Array(n * n);
@@ -73,16 +82,20 @@ export class PlanarFilter {
   propagate(speedMps: number, turnRateRadps: number, dtS: number, moving: boolean): void {
     const { n, a, a2, phiDense } = this;
     for (const f of this.fEntries) a[f.i * n + f.j] = (f.c0 + f.cv * speedMps + f.cw * turnRateRadps) * dtS;
-    // A² and A³ by A's few non-zeros; Φ = I + A + A²/2 + A³/6.
+    // A² and A³ by A's few non-zeros; Φ = I + A + A²/2 + A³/6. Only terms inside A's and A²'s
+    // patterns are added: the others are ±0, and adding ±0 to a sum that starts at +0 changes no bit.
     a2.fill(0);
-    for (const f of this.fEntries) {
-      const v = a[f.i * n + f.j];
-      for (let j = 0; j < n; j++) a2[f.i * n + j] += v * a[f.j * n + j];
+    const { fEntries, aRowCols, a2ColRows } = this;
+    for (let q = 0; q < fEntries.length; q++) {
+      const f = fEntries[q];
+      const v = a[f.i * n + f.j], cols = aRowCols[f.j];
+      for (let c = 0; c < cols.length; c++) a2[f.i * n + cols[c]] += v * a[f.j * n + cols[c]];
     }
     for (let e = 0; e < n * n; e++) phiDense[e] = a[e] + 0.5 * a2[e];
-    for (const f of this.fEntries) {
-      const v = a[f.i * n + f.j] / 6;
-      for (let i = 0; i < n; i++) phiDense[i * n + f.j] += a2[i * n + f.i] * v;
+    for (let q = 0; q < fEntries.length; q++) {
+      const f = fEntries[q];
+      const v = a[f.i * n + f.j] / 6, rows = a2ColRows[f.i];
+      for (let r = 0; r < rows.length; r++) phiDense[rows[r] * n + f.j] += a2[rows[r] * n + f.i] * v;
     }
     for (let i = 0; i < n; i++) phiDense[i * n + i] += 1;
     const { rowStart, col } = this.phiPattern;
@@ -115,14 +128,7 @@ export class PlanarFilter {
    * (and P unchanged) when it is not positive.
    */
   update(hIdx: Int32Array, hVal: Float64Array, count: number, r: number): number {
-    const { n, p, u, gain } = this;
-    const idx = hIdx.subarray(0, count), val = hVal.subarray(0, count);
-    const hph = multiplySparseVector(p, 0, n, idx, val, u);
-    const s = hph + r;
-    if (!(s > 0) || !Number.isFinite(s)) return 0;
-    for (let i = 0; i < n; i++) gain[i] = u[i] / s;
-    josephUpdateInPlace(p, 0, n, gain, u, hph, r);
-    return s;
+    return scalarJosephUpdate(this.p, this.n, hIdx.subarray(0, count), hVal.subarray(0, count), r, this.u, this.gain);
   }
 
   /**

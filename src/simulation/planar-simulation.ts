@@ -104,6 +104,14 @@ export class PlanarSimulation implements MonteCarloModel {
     return phi;
   }
 
+  /** Appends (state, coefficient) to the sparse H when the coefficient is not zero; returns the new count. */
+  private putH(count: number, state: number, coefficient: number): number {
+    if (coefficient === 0) return count;
+    this.hIdx[count] = state;
+    this.hVal[count] = coefficient;
+    return count + 1;
+  }
+
   /** One scalar measurement: truth from the true pose, prediction and H from the estimate, Joseph update, feedback. */
   private measure(truthRow: ScalarMeasurement, rowsAt: (g: MeasurementGeometry) => ScalarMeasurement[], rng: RunRandom): void {
     const { plan, dr, filter, geometry } = this;
@@ -120,11 +128,13 @@ export class PlanarSimulation implements MonteCarloModel {
     for (const [s, coeff] of est.hStates) if (s !== heading) yHat += coeff * dr.estimate[s];
     const z = est.wraps ? wrapAngle(yHat - y) : yHat - y;
     const c = Math.cos(dr.headingRad), s = Math.sin(dr.headingRad);
-    let count = 0;
-    const put = (i: number, v: number) => { if (v !== 0) { this.hIdx[count] = i; this.hVal[count++] = v; } };
-    put(along, est.hNorth * c + est.hEast * s);
-    put(cross, -est.hNorth * s + est.hEast * c);
-    for (const [st, coeff] of est.hStates) put(st, coeff * plan.sign[st]);
+    // H in the filter's frame, its non-zero entries only (no closure: this runs for every scalar measurement).
+    let count = this.putH(0, along, est.hNorth * c + est.hEast * s);
+    count = this.putH(count, cross, -est.hNorth * s + est.hEast * c);
+    for (let e = 0; e < est.hStates.length; e++) {
+      const st = est.hStates[e][0];
+      count = this.putH(count, st, est.hStates[e][1] * plan.sign[st]);
+    }
     if (filter.update(this.hIdx, this.hVal, count, r) === 0) return;
     const g = filter.gain;
     const dA = g[along] * z, dX = g[cross] * z, dPsi = g[heading] * z;

@@ -1,5 +1,8 @@
 import type { RunRandom } from './run-random';
 
+/** Intervals whose φ and √Q_d one process remembers. */
+const MEMO_SIZE = 64;
+
 /**
  * One scalar error process in exact discrete time: a random constant, a
  * random walk or a first-order Gauss-Markov process,
@@ -18,6 +21,17 @@ export class ScalarProcess {
   private lastIntervalS = -1;
   private phi = 1;
   private sdDrive = 0;
+  /**
+   * φ and √Q_d of the intervals seen so far, keyed by the exact interval: a
+   * run meets a few dozen distinct intervals (sample periods that differ in
+   * the last bits, and the slivers between a sample and a step boundary)
+   * about 30,000 times, and the values are a pure function of Δ, so the
+   * memo changes no bit of the result.
+   */
+  private readonly memoIntervalS = new Float64Array(MEMO_SIZE);
+  private readonly memoPhi = new Float64Array(MEMO_SIZE);
+  private readonly memoSd = new Float64Array(MEMO_SIZE);
+  private memoCount = 0;
 
   /**
    * @param decayPerS 1/T in 1/s (0 for a random walk or a constant).
@@ -48,6 +62,13 @@ export class ScalarProcess {
 
   private discretise(dtS: number): void {
     this.lastIntervalS = dtS;
+    for (let i = 0; i < this.memoCount; i++) {
+      if (this.memoIntervalS[i] === dtS) {
+        this.phi = this.memoPhi[i];
+        this.sdDrive = this.memoSd[i];
+        return;
+      }
+    }
     if (this.decayPerS > 0) {
       this.phi = Math.exp(-dtS * this.decayPerS);
       // -expm1(-2Δ/T) = 1 - φ², without cancellation for Δ << T.
@@ -56,5 +77,10 @@ export class ScalarProcess {
       this.phi = 1;
       this.sdDrive = Math.sqrt(this.psdSI * dtS);
     }
+    // A full memo starts over (a mission with ever new intervals pays the exp as before).
+    const slot = this.memoCount < MEMO_SIZE ? this.memoCount++ : (this.memoCount = 1) - 1;
+    this.memoIntervalS[slot] = dtS;
+    this.memoPhi[slot] = this.phi;
+    this.memoSd[slot] = this.sdDrive;
   }
 }

@@ -2,6 +2,7 @@ import { CAUTION } from '../report/caution';
 import { formatSignificant } from '../units';
 import type { SimulationFlag } from './study-flags';
 import type { StudyStatistics } from './study-statistics';
+import type { SimulationJson } from './simulation-json';
 
 /** Display unit and factor from SI for a quantity's unit (angles in degrees). */
 function display(unitSI: string): { unit: string; factor: number } {
@@ -26,14 +27,14 @@ export function simulationVerdict(stats: StudyStatistics, flags: SimulationFlag[
  * The study as JSON (format "sigma-ledger-simulation"): series in display
  * units (heading in deg), every `every`-th step and the last.
  */
-export function simulationJson(id: StudyIdentity, stats: StudyStatistics, flags: SimulationFlag[], every = 1): object {
+export function simulationJson(id: StudyIdentity, stats: StudyStatistics, flags: SimulationFlag[], every = 1): SimulationJson {
   const keep: number[] = [];
   for (let k = 0; k < stats.tS.length; k += every) keep.push(k);
   if (keep[keep.length - 1] !== stats.tS.length - 1) keep.push(stats.tS.length - 1);
   const pick = (a: Float64Array, f = 1) => keep.map((k) => a[k] * f);
   return {
-    format: 'sigma-ledger-simulation',
-    formatVersion: 1,
+    format: 'sigma-ledger-simulation' as const,
+    formatVersion: 1 as const,
     ...id,
     verdict: simulationVerdict(stats, flags),
     flags: flags.map(({ outage, ...f }) => ({ ...f, outage: outage?.id ?? null, sensor: outage?.sensorId ?? null })),

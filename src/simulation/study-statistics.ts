@@ -1,5 +1,5 @@
 import { chiSquareQuantile } from './chi-square';
-import type { MonteCarloModel } from './monte-carlo-model';
+import type { StudyShape } from './monte-carlo-model';
 import { groupField, quantityField, sumLayout, type StudySums } from './study-sums';
 
 /** Two-sided probability outside the bands (95 % bands). */
@@ -55,7 +55,7 @@ export interface StudyStatistics {
  * 95 % band now and then, so flags use the simultaneous bound at
  * 1 - 0.025/M for M steps (Bonferroni).
  */
-export function studyStatistics(model: MonteCarloModel, sums: StudySums): StudyStatistics {
+export function studyStatistics(model: StudyShape, sums: StudySums): StudyStatistics {
   const layout = sumLayout(model);
   const N = sums.runs, steps = layout.steps, d = sums.data;
   const simultaneousP = 1 - BAND_TAIL / 2 / steps;

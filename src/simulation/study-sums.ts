@@ -1,4 +1,4 @@
-import type { MonteCarloModel, RunSink } from './monte-carlo-model';
+import type { RunSink, StudyShape } from './monte-carlo-model';
 
 /**
  * Running sums of a set of runs, per step: for each quantity Σe, Σe² and the
@@ -21,7 +21,7 @@ export interface SumLayout {
 }
 
 /** The layout of a model's sums. */
-export function sumLayout(model: MonteCarloModel): SumLayout {
+export function sumLayout(model: StudyShape): SumLayout {
   const quantities = model.quantities.length, groups = model.neesGroups.length;
   return { steps: model.stepTimesS.length, quantities, groups, fields: 3 * quantities + 2 * groups };
 }

@@ -1,5 +1,5 @@
 /**
- * `npm run bench`, 3-D part: the benchmark case of docs/inertial-model.md §8,
+ * `npm run bench`, 3-D part: the benchmark case of docs/inertial-model.md §10,
  * a 10-minute flight at a 0.1 s step with 21 states and 15 sources,
  * contributions included (the drone reference mission without the aiding
  * biases and IMU scale factors). Target: median under 250 ms; growth

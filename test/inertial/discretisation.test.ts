@@ -41,7 +41,7 @@ describe('inertial discretisation', () => {
   });
 
   it.each([['drone', droneScenario, [300, 344.9, 600]], ['rover', roverScenario, [430, 549.9, 900]]] as const)(
-    'holding F over straight segments changes the %s reference values by less than 1e-4 (docs/inertial-model.md §8)',
+    'holding F over straight segments changes the %s reference values by less than 1e-4 (docs/inertial-model.md §10)',
     (_name, scenario, times) => {
       const held = runInertialBudget(scenario(), { contributions: false });
       const exact = runInertialBudget(scenario(), { contributions: false, everyStep: true });

@@ -91,4 +91,21 @@ describe('per-run generators', () => {
     expect(Math.abs(mean)).toBeLessThan(3.29 / Math.sqrt(n));
     expectVariance(x, 1);
   });
+
+  it('remembers φ and √Q_d of past intervals without changing a bit (memo against fresh processes, more intervals than it holds)', () => {
+    // The exact discretisation is a pure function of Δ (Gelb 1974, Table 3.4-1, from memory): a process that
+    // has seen 320 intervals, some several times, must give what a process seeing each interval first gives.
+    const decayPerS = 1 / 30, psd = 2.7e-5;
+    // 40 intervals three times (the memo hits), then 101 (more than it holds); neighbours 1e-9 apart or more.
+    const intervals = Array.from({ length: 320 }, (_, i) => 0.005 * (1 + (i < 120 ? (i * 7) % 40 : (i * 37) % 101) * 1e-9));
+    const seasoned = new ScalarProcess(decayPerS, psd);
+    const rngA = RunRandom.forRun(3, 0), rngB = RunRandom.forRun(3, 0);
+    for (const dt of intervals) {
+      // start() forgets the last interval but not the memo; the fresh process has neither.
+      seasoned.start(0.02, rngA);
+      const fresh = new ScalarProcess(decayPerS, psd);
+      fresh.start(0.02, rngB);
+      expect(seasoned.advanceTo(dt, rngA)).toBe(fresh.advanceTo(dt, rngB));
+    }
+  });
 });

@@ -15,11 +15,13 @@ import './sl-calibration-chart';
 import './sl-noise-ledger';
 import './sl-sizing-panel';
 import './sl-compare-panel';
+import './sl-monte-carlo-panel';
 import type { BudgetDocument } from '../../src/index';
 
 /** The findings' tabs, in order, with their labels. */
 export const FINDINGS_TABS = [
   ['time', 'Over time'], ['shares', 'Shares'], ['checkpoint', 'Checkpoint'], ['calibration', 'Calibration'], ['noise', 'R · Q · P0'], ['sizing', 'Sizing'],
+  ['montecarlo', 'Monte Carlo'],
 ] as const;
 
 /** Key of a findings tab. */
@@ -160,6 +162,8 @@ export class SlFindings extends LitElement {
       case 'sizing':
         return html`<sl-sizing-panel .document=${this.document} .requirementIds=${result.requirements.map((r) => r.id)}></sl-sizing-panel>
           <h3>Candidates compared</h3><sl-compare-panel .document=${this.document}></sl-compare-panel>`;
+      case 'montecarlo':
+        return html`<sl-monte-carlo-panel .document=${this.document}></sl-monte-carlo-panel>`;
     }
   }
 

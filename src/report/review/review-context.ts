@@ -4,6 +4,7 @@ import type { BudgetResult } from '../../pipeline';
 import type { SizingResult } from '../../budget/sizing';
 import type { JsonResult } from '../json-result';
 import { formatSignificant, withUnit } from '../../units';
+import type { SimulationJson } from '../../simulation/simulation-json';
 
 /** Who made the report and from which bytes, so a reviewer can rerun it. */
 export interface ReportProvenance {
@@ -13,6 +14,8 @@ export interface ReportProvenance {
   documentSha256: string;
   /** Sigma Ledger's version (TOOL_VERSION). */
   toolVersion: string;
+  /** A Monte Carlo study of this document (`simulate --json`), when the user gives one (sections/monte-carlo-section.ts). */
+  simulation?: SimulationJson;
 }
 
 /** Everything a report section may read; built once per report. */

@@ -18,6 +18,7 @@ import { calibrationSection } from './sections/calibration-section';
 import { assumedSection } from './sections/assumed-section';
 import { rerunSection } from './sections/rerun-section';
 import { candidatesSection } from './sections/candidates-section';
+import { monteCarloSection } from './sections/monte-carlo-section';
 
 /** Builds one section from the context; undefined leaves it out. */
 export type SectionBuilder = (ctx: ReviewContext) => ReportSection | undefined;
@@ -30,6 +31,7 @@ export const REVIEW_SECTIONS: readonly SectionBuilder[] = [
   checkpointsSection,
   sizingSection,
   candidatesSection,
+  monteCarloSection,
   modelSection,
   sensorRowsSection,
   noiseSection,
