@@ -23,7 +23,8 @@ export const SENSITIVITY_CLI_OPTIONS = {
 export function sensitivityCommand(file: string, values: ParsedValues, io: Io): number {
   const range = parseRange(values.range);
   const rows = typeof values.rows === 'string' ? values.rows.split(',').map((r) => r.trim()).filter(Boolean) : [];
-  const loaded = loadBudget(file);
+  // The sensitivity runs its own analyses (the base one included): the cells are all it needs loaded.
+  const loaded = loadBudget(file, { compute: false });
   const problems = sheetProblems(loaded);
   for (const p of problems) io.err(`${p}\n`);
   if (problems.length) return EXIT.badInput;

@@ -32,7 +32,8 @@ export function parseSweep(text: string): { from: number; to: number; n: number 
 export function sizeSweepCommand(file: string, rowId: string, requirementId: string | undefined, sweepText: string, io: Io): number {
   const { from, to, n } = parseSweep(sweepText);
   const values = withSweepPath(() => sweepValues(from, to, n));
-  const loaded = loadBudget(file);
+  // Every point is an analysis of its own: the cells are all the sweep needs loaded.
+  const loaded = loadBudget(file, { compute: false });
   const problems = sheetProblems(loaded);
   for (const p of problems) io.err(`${p}\n`);
   if (problems.length) return EXIT.badInput;
