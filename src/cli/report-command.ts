@@ -7,7 +7,7 @@
 import { createHash } from 'node:crypto';
 import { readFileSync, writeFileSync } from 'node:fs';
 import { InputError } from '../errors';
-import { buildReviewReport, renderReviewHtml, renderReviewMarkdown, TOOL_VERSION } from '../report/review';
+import { buildReviewReport, renderReviewHtml, renderReviewMarkdown, TOOL_VERSION, type ReviewAnalyses } from '../report/review';
 import { EXIT, type Io } from './commands';
 import { loadBudget, sheetProblems, withDocumentPaths } from './load-budget';
 
@@ -26,6 +26,8 @@ export interface ReportCommandOptions {
   file: string;
   out?: string;
   format: ReportFormat;
+  /** The sensitivity and R sweeps to add. */
+  analyses?: ReviewAnalyses;
 }
 
 /**
@@ -41,13 +43,16 @@ export function reportOptionsFromArgs(file: string, values: { out?: string; form
 
 /** Writes the report; returns 0 when every requirement holds, 1 when some fails, 2 for a partial budget. */
 export function reportCommand(opts: ReportCommandOptions, io: Io): number {
-  const loaded = loadBudget(opts.file);
+  // buildReviewReport runs the analysis itself: the cells are all the load needs.
+  const loaded = loadBudget(opts.file, { compute: false });
   for (const note of loaded.notes) io.err(`${loaded.fileName}: ${note}\n`);
   const problems = sheetProblems(loaded);
   for (const p of problems) io.err(`${p}\n`);
   if (loaded.sheet.blocked) return EXIT.badInput;
   const documentSha256 = createHash('sha256').update(readFileSync(opts.file)).digest('hex');
-  const report = withDocumentPaths(loaded, () => buildReviewReport(loaded.document, { fileName: opts.file, documentSha256, toolVersion: TOOL_VERSION }));
+  const report = withDocumentPaths(loaded, () => buildReviewReport(
+    loaded.document, { fileName: opts.file, documentSha256, toolVersion: TOOL_VERSION }, undefined, opts.analyses,
+  ));
   const text = opts.format === 'md' ? renderReviewMarkdown(report) : renderReviewHtml(report);
   if (opts.out) {
     try {
@@ -63,7 +68,9 @@ export function reportCommand(opts: ReportCommandOptions, io: Io): number {
   return verdictsHold(report) ? EXIT.pass : EXIT.fail;
 }
 
+/** As `run`: with a filter design the requirements judged on the actual error decide. */
 function verdictsHold(report: ReturnType<typeof buildReviewReport>): boolean {
-  const verdicts = report.sections.find((s) => s.id === 'requirements')?.blocks.find((b) => b.kind === 'table' && b.id === 'verdicts');
+  const actual = report.sections.find((s) => s.id === 'filter-design')?.blocks.find((b) => b.kind === 'table' && b.id === 'filter-requirements');
+  const verdicts = actual ?? report.sections.find((s) => s.id === 'requirements')?.blocks.find((b) => b.kind === 'table' && b.id === 'verdicts');
   return !verdicts || verdicts.kind !== 'table' || verdicts.rows.every((r) => r[r.length - 1] === 'PASS');
 }

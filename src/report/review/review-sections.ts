@@ -17,6 +17,9 @@ import { noiseSection } from './sections/noise-section';
 import { calibrationSection } from './sections/calibration-section';
 import { assumedSection } from './sections/assumed-section';
 import { rerunSection } from './sections/rerun-section';
+import { filterDesignSection } from './sections/filter-design-section';
+import { sensitivitySection } from './sections/sensitivity-section';
+import { rSweepSection } from './sections/r-sweep-section';
 
 /** Builds one section from the context; undefined leaves it out. */
 export type SectionBuilder = (ctx: ReviewContext) => ReportSection | undefined;
@@ -28,6 +31,9 @@ export const REVIEW_SECTIONS: readonly SectionBuilder[] = [
   sigmaChartsSection,
   checkpointsSection,
   sizingSection,
+  filterDesignSection,
+  sensitivitySection,
+  rSweepSection,
   modelSection,
   sensorRowsSection,
   noiseSection,
