@@ -97,3 +97,10 @@ export { ALLAN_SENSOR_KINDS, SENSOR_TERM_UNITS, type AllanSensorKind } from './a
 export { calibrationReport, checkCalibrationUnit, type CalibrationReport } from './calibration/calibration-report';
 export { fitOffsetAndScaleFactor } from './calibration/linear-calibration';
 export { checkResidualWhiteness } from './calibration/residual-whiteness';
+
+// Filter model versus truth on the page: the assumption sensitivity, the R sweep, the tuning editors' choices.
+export { assumptionSensitivity, type SensitivityEntry, type SensitivityOptions } from './sensitivity/assumption-sensitivity';
+export { sweepFilterR, DEFAULT_R_SCALES, type RSweep, type RSweepValue } from './suboptimal/r-sweep';
+export { tuningModels, type TuningModelChoice } from './suboptimal/tuning-choices';
+export { runTruthVersusFilterProblem, type TruthVersusFilterProblem, type TruthVersusFilterRun } from './suboptimal/run-truth-versus-filter-problem';
+export { runInertialTruthVersusFilter, truthMapByName, type InertialTruthVersusFilter } from './suboptimal/inertial-truth-versus-filter';

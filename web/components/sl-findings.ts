@@ -14,11 +14,14 @@ import './sl-checkpoint-table';
 import './sl-calibration-chart';
 import './sl-noise-ledger';
 import './sl-sizing-panel';
+import './sl-sensitivity-panel';
+import './sl-r-sweep-panel';
 import type { BudgetDocument } from '../../src/index';
 
 /** The findings' tabs, in order, with their labels. */
 export const FINDINGS_TABS = [
   ['time', 'Over time'], ['shares', 'Shares'], ['checkpoint', 'Checkpoint'], ['calibration', 'Calibration'], ['noise', 'R · Q · P0'], ['sizing', 'Sizing'],
+  ['assumptions', 'Assumptions'], ['r-sweep', 'R sweep'],
 ] as const;
 
 /** Key of a findings tab. */
@@ -158,6 +161,10 @@ export class SlFindings extends LitElement {
         return html`<sl-noise-ledger .noise=${result.noise} budget-title=${view.title} caution=${view.caution}></sl-noise-ledger>`;
       case 'sizing':
         return html`<sl-sizing-panel .document=${this.document} .requirementIds=${result.requirements.map((r) => r.id)}></sl-sizing-panel>`;
+      case 'assumptions':
+        return html`<sl-sensitivity-panel .document=${this.document}></sl-sensitivity-panel>`;
+      case 'r-sweep':
+        return html`<sl-r-sweep-panel .document=${this.document}></sl-r-sweep-panel>`;
     }
   }
 
