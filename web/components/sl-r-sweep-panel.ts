@@ -26,6 +26,7 @@ export class SlRSweepPanel extends LitElement {
     .plot { position: relative; height: 230px; }
     .best { font-size: 12px; color: var(--sl-ink-soft); margin: 2px 0 0; }
     .error { color: var(--sl-fail); }
+    .older { color: var(--sl-warn-ink); background: var(--sl-warn-bg); padding: 3px 8px; border-radius: var(--sl-radius); }
   `;
 
   /** The open document (the worker evaluates it afresh). */
@@ -36,6 +37,8 @@ export class SlRSweepPanel extends LitElement {
   @state() private progress = '';
   @state() private sweep?: RSweep;
   @state() private error?: string;
+  /** The document the shown answer was computed from (a later edit marks it as older). */
+  private answeredFor?: BudgetDocument;
   @queryAll('canvas') private canvases!: NodeListOf<HTMLCanvasElement>;
   /** One chart per requirement (for tests: `plots[i].chart`). */
   plots: ChartController[] = [];
@@ -65,6 +68,8 @@ export class SlRSweepPanel extends LitElement {
         ${this.running ? html`<button type="button" @click=${() => this.runner.cancel()}>Cancel</button><span role="status">${this.progress}</span>` : nothing}
       </form>
       ${this.error ? html`<p class="error" role="alert">${this.error}</p>` : nothing}
+      ${this.sweep && this.answeredFor !== this.document
+        ? html`<p class="older" role="status">From the budget before its latest edit: Sweep again to update.</p>` : nothing}
       ${this.sweep ? this.result(this.sweep) : nothing}
     `;
   }
@@ -93,12 +98,16 @@ export class SlRSweepPanel extends LitElement {
   private async submit(e: Event): Promise<void> {
     e.preventDefault();
     const select = this.renderRoot.querySelector<HTMLSelectElement>('#sensor')!;
+    const doc = this.document!;
     this.running = true;
     this.error = undefined;
     try {
-      const answer = await this.runner.run({ kind: 'r-sweep', document: this.document!, sensorId: select.value },
+      const answer = await this.runner.run({ kind: 'r-sweep', document: doc, sensorId: select.value },
         (done, total) => (this.progress = `point ${done} of ${total}`));
-      if (answer.kind === 'r-sweep') this.sweep = answer.sweep;
+      if (answer.kind === 'r-sweep') {
+        this.answeredFor = doc;
+        this.sweep = answer.sweep;
+      }
     } catch (err) {
       if ((err as Error).message !== 'cancelled') this.error = `Could not sweep R: ${(err as Error).message}`;
     } finally {

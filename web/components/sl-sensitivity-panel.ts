@@ -31,6 +31,7 @@ export class SlSensitivityPanel extends LitElement {
     th, td { border-bottom: 1px solid var(--sl-rule); padding: 3px 8px; text-align: left; }
     td.num { text-align: right; }
     .error { color: var(--sl-fail); }
+    .older { color: var(--sl-warn-ink); background: var(--sl-warn-bg); padding: 3px 8px; border-radius: var(--sl-radius); }
     .id { font-family: var(--sl-mono); font-size: 12px; }
   `;
 
@@ -45,6 +46,8 @@ export class SlSensitivityPanel extends LitElement {
   @state() private progress = '';
   @state() private entries?: SensitivityEntry[];
   @state() private error?: string;
+  /** The document the shown answer was computed from (a later edit marks it as older). */
+  private answeredFor?: BudgetDocument;
   @query('canvas') private canvas?: HTMLCanvasElement;
   private chart?: Chart<'bar', number[], string>;
   /** The runner (tests may replace it before the first run). */
@@ -77,6 +80,8 @@ export class SlSensitivityPanel extends LitElement {
         </div>
       </form>
       ${this.error ? html`<p class="error" role="alert">${this.error}</p>` : nothing}
+      ${this.entries && this.answeredFor !== this.document
+        ? html`<p class="older" role="status">From the budget before its latest edit: Vary again to update.</p>` : nothing}
       ${this.entries ? this.result(this.entries) : nothing}
     `;
   }
@@ -121,14 +126,16 @@ export class SlSensitivityPanel extends LitElement {
       this.error = `The range must be two scales with 0 < low < high, e.g. 0.5 to 2; got ${this.low} to ${this.high}.`;
       return;
     }
+    const doc = this.document!;
     this.running = true;
     this.error = undefined;
     try {
       const answer = await this.runner.run(
-        { kind: 'sensitivity', document: this.document!, rows: [...this.picked], range: [this.low, this.high] },
+        { kind: 'sensitivity', document: doc, rows: [...this.picked], range: [this.low, this.high] },
         (done, total) => (this.progress = `run ${done} of ${total}`),
       );
       if (answer.kind === 'sensitivity') {
+        this.answeredFor = doc;
         this.chart?.destroy();
         this.chart = undefined;
         this.entries = answer.entries;

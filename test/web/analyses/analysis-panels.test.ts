@@ -82,5 +82,11 @@ describe('the R sweep on the page', () => {
     });
     // Filter otherwise equal to the truth: the smallest actual worst is at x1 (Gelb, Applied Optimal Estimation, 1974, §7.2).
     expect(el.shadowRoot!.querySelector('.best')!.textContent).to.contain('×1;');
+    expect(el.shadowRoot!.querySelector('.older')).to.equal(null);
+    // An edit after the sweep leaves the plots up, marked as from the budget before it.
+    el.document = structuredClone(doc);
+    await el.updateComplete;
+    expect(el.shadowRoot!.querySelector('.older')!.textContent).to.contain('before its latest edit');
+    expect(el.plots.length).to.equal(sweep.points[0].values.length);
   });
 });
