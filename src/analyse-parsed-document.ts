@@ -30,6 +30,11 @@ export interface AnalyseOptions {
   evaluate?: (document: BudgetDocument) => SheetEvaluation;
   /** Called with the evaluated input just before the analysis runs (to announce a long run, say). */
   beforeCompute?: (input: BudgetInput) => void;
+  /**
+   * `false`: evaluate the cells only, with no covariance run (`budget` and `report` absent), for callers
+   * that run analyses of their own on `sheet.input` (the sensitivity, the R sweep, a row sweep).
+   */
+  compute?: false;
 }
 
 /** Why nothing could be computed, with the document path (`sensors[0].sources[2].value`) when one is known. */
@@ -68,6 +73,7 @@ export function analyseParsedDocument(doc: BudgetDocument, notes: string[], opti
   const title = doc.title + (partial ? ' (PARTIAL: cells with errors were left out)' : '');
   const base = { document: doc, notes, sheet, partial, title };
   if (!sheet.input) return { ...base, blocked: { message: sheet.blocked ?? 'nothing to compute' } };
+  if (options.compute === false) return base;
   try {
     options.beforeCompute?.(sheet.input);
     const budget = computeBudget(sheet.input, { contributions: options.contributions, every: options.report ? options.report.every : undefined });

@@ -126,3 +126,9 @@ export { readSimulationJson, type SimulationJson } from './simulation/simulation
 export type { StudySums } from './simulation/study-sums';
 export { inertialSimulation, InertialSimulation } from './inertial/monte-carlo/inertial-simulation';
 
+// Filter model versus truth on the page: the assumption sensitivity, the R sweep, the tuning editors' choices.
+export { assumptionSensitivity, type SensitivityEntry, type SensitivityOptions } from './sensitivity/assumption-sensitivity';
+export { sweepFilterR, DEFAULT_R_SCALES, type RSweep, type RSweepValue } from './suboptimal/r-sweep';
+export { tuningModels, type TuningModelChoice } from './suboptimal/tuning-choices';
+export { runTruthVersusFilterProblem, type TruthVersusFilterProblem, type TruthVersusFilterRun } from './suboptimal/run-truth-versus-filter-problem';
+export { runInertialTruthVersusFilter, truthMapByName, type InertialTruthVersusFilter } from './suboptimal/inertial-truth-versus-filter';

@@ -4,12 +4,11 @@
  * believed worst value: what inflating (or trusting) R costs.
  */
 import { InputError } from '../errors';
-import { computeBudget } from '../pipeline';
 import { sweepFilterR } from '../suboptimal/r-sweep';
 import { formatRSweep } from '../report/sensitivity-text';
 import type { ParsedValues } from './allan-command';
 import { EXIT, type Io } from './commands';
-import { loadBudget, sheetProblems, withDocumentPaths } from './load-budget';
+import { loadBudget, sheetProblems, throwIfBlocked, withDocumentPaths } from './load-budget';
 
 /**
  * Runs the command (uses `--sensor`, which main.ts already declares); exit 0 with the table, 2 for bad input.
@@ -18,11 +17,14 @@ import { loadBudget, sheetProblems, withDocumentPaths } from './load-budget';
 export function rSweepCommand(file: string, values: ParsedValues, io: Io): number {
   if (typeof values.sensor !== 'string' || !values.sensor) throw new InputError('--sensor', 'is required: the aiding sensor whose R the filter scales, e.g. --sensor gnss');
   const sensorId = values.sensor;
-  const loaded = loadBudget(file);
+  // The load's analysis (totals only) is the base every point of the sweep reuses.
+  const loaded = loadBudget(file, { contributions: false, report: false });
   const problems = sheetProblems(loaded);
   for (const p of problems) io.err(`${p}\n`);
   if (problems.length) return EXIT.badInput;
-  const sweep = withDocumentPaths(loaded, (input) => sweepFilterR(input, computeBudget(input, { contributions: false }), sensorId));
+  throwIfBlocked(loaded);
+  const base = loaded.budget!;
+  const sweep = withDocumentPaths(loaded, (input) => sweepFilterR(input, base, sensorId));
   io.out(values.json === true ? JSON.stringify(sweep) + '\n' : formatRSweep(sweep));
   return EXIT.pass;
 }

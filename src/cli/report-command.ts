@@ -7,7 +7,7 @@
 import { createHash } from 'node:crypto';
 import { readFileSync, writeFileSync } from 'node:fs';
 import { InputError } from '../errors';
-import { buildReviewReport, renderReviewHtml, renderReviewMarkdown, TOOL_VERSION } from '../report/review';
+import { buildReviewReport, renderReviewHtml, renderReviewMarkdown, TOOL_VERSION, type ReviewAnalyses } from '../report/review';
 import { EXIT, type Io } from './commands';
 import { readSimulationJson, type SimulationJson } from '../simulation/simulation-json';
 import { loadBudget, sheetProblems, withDocumentPaths } from './load-budget';
@@ -30,6 +30,8 @@ export interface ReportCommandOptions {
   format: ReportFormat;
   /** A Monte Carlo study of the same file (simulate --json or merge --json) to show in the report. */
   simulation?: string;
+  /** The sensitivity and R sweeps to add. */
+  analyses?: ReviewAnalyses;
 }
 
 /**
@@ -45,7 +47,8 @@ export function reportOptionsFromArgs(file: string, values: { out?: string; form
 
 /** Writes the report; returns 0 when every requirement holds, 1 when some fails, 2 for a partial budget. */
 export function reportCommand(opts: ReportCommandOptions, io: Io): number {
-  const loaded = loadBudget(opts.file);
+  // buildReviewReport runs the analysis itself: the cells are all the load needs.
+  const loaded = loadBudget(opts.file, { compute: false });
   for (const note of loaded.notes) io.err(`${loaded.fileName}: ${note}\n`);
   const problems = sheetProblems(loaded);
   for (const p of problems) io.err(`${p}\n`);
@@ -53,7 +56,7 @@ export function reportCommand(opts: ReportCommandOptions, io: Io): number {
   const documentSha256 = createHash('sha256').update(readFileSync(opts.file)).digest('hex');
   const simulation = opts.simulation === undefined ? undefined : readStudyFor(opts.simulation, documentSha256);
   const provenance = { fileName: opts.file, documentSha256, toolVersion: TOOL_VERSION, simulation };
-  const report = withDocumentPaths(loaded, () => buildReviewReport(loaded.document, provenance));
+  const report = withDocumentPaths(loaded, () => buildReviewReport(loaded.document, provenance, undefined, opts.analyses));
   const text = opts.format === 'md' ? renderReviewMarkdown(report) : renderReviewHtml(report);
   if (opts.out) {
     try {
@@ -69,8 +72,10 @@ export function reportCommand(opts: ReportCommandOptions, io: Io): number {
   return verdictsHold(report) ? EXIT.pass : EXIT.fail;
 }
 
+/** As `run`: with a filter design the requirements judged on the actual error decide. */
 function verdictsHold(report: ReturnType<typeof buildReviewReport>): boolean {
-  const verdicts = report.sections.find((s) => s.id === 'requirements')?.blocks.find((b) => b.kind === 'table' && b.id === 'verdicts');
+  const actual = report.sections.find((s) => s.id === 'filter-design')?.blocks.find((b) => b.kind === 'table' && b.id === 'filter-requirements');
+  const verdicts = actual ?? report.sections.find((s) => s.id === 'requirements')?.blocks.find((b) => b.kind === 'table' && b.id === 'verdicts');
   return !verdicts || verdicts.kind !== 'table' || verdicts.rows.every((r) => r[r.length - 1] === 'PASS');
 }
 

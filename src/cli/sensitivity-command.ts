@@ -22,8 +22,9 @@ export const SENSITIVITY_CLI_OPTIONS = {
  */
 export function sensitivityCommand(file: string, values: ParsedValues, io: Io): number {
   const range = parseRange(values.range);
-  const rows = typeof values.rows === 'string' ? values.rows.split(',').map((r) => r.trim()).filter(Boolean) : [];
-  const loaded = loadBudget(file);
+  const rows = parseRows(values.rows);
+  // The sensitivity runs its own analyses (the base one included): the cells are all it needs loaded.
+  const loaded = loadBudget(file, { compute: false });
   const problems = sheetProblems(loaded);
   for (const p of problems) io.err(`${p}\n`);
   if (problems.length) return EXIT.badInput;
@@ -32,7 +33,16 @@ export function sensitivityCommand(file: string, values: ParsedValues, io: Io): 
   return EXIT.pass;
 }
 
-function parseRange(text: string | boolean | undefined): [number, number] {
+/** `--rows A.B,C.D` as a list (empty when not given). */
+export function parseRows(text: string | boolean | undefined): string[] {
+  return typeof text === 'string' ? text.split(',').map((r) => r.trim()).filter(Boolean) : [];
+}
+
+/**
+ * `--range LOW,HIGH` (default 0.5,2).
+ * @throws InputError at --range for anything but two scales 0 < LOW < HIGH.
+ */
+export function parseRange(text: string | boolean | undefined): [number, number] {
   if (typeof text !== 'string') return [0.5, 2];
   const parts = text.split(',').map(Number);
   if (parts.length !== 2 || !parts.every((v) => v > 0 && Number.isFinite(v)) || !(parts[1] > parts[0])) {

@@ -50,7 +50,8 @@ export function sizeSweepCommand(
   if (sharded && file === '-') throw new InputError('--shard', 'needs a budget file (merge checks it by its SHA-256), not standard input');
   const [firstPoint, endPoint] = sharded ? shardSlice(allValues.length, sharded.shard) : [0, allValues.length];
   const values = allValues.slice(firstPoint, endPoint);
-  const loaded = loadBudget(file);
+  // Every point is an analysis of its own: the cells are all the sweep needs loaded.
+  const loaded = loadBudget(file, { compute: false });
   const problems = sheetProblems(loaded);
   for (const p of problems) io.err(`${p}\n`);
   if (problems.length) return EXIT.badInput;

@@ -18,7 +18,8 @@ export function tunedRowLines(input: BudgetInput): string[] {
   return input.sensors.flatMap((s) => s.sources.flatMap((row) => (row.tuning ? [`  ${s.id}.${row.id}: ${describeTuning(row.tuning, row.value)}`] : [])));
 }
 
-function describeTuning(t: TuningInput, truth: { value: number; unit: string }): string {
+/** One row's filter design in words, beside its truth value. Throws nothing. */
+export function describeTuning(t: TuningInput, truth: { value: number; unit: string }): string {
   if (t.leftOut) return 'left out of the filter';
   const parts: string[] = [];
   if (t.value) parts.push(`tuned with ${fmt(t.value.value)} ${t.value.unit} (truth ${fmt(truth.value)} ${truth.unit})`);

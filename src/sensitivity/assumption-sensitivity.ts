@@ -37,6 +37,8 @@ export interface SensitivityOptions {
   rows?: string[];
   /** Scale range [low, high], default [0.5, 2]. */
   range?: [number, number];
+  /** Called after each analysis run with how many are done of the total (the page's progress line). */
+  onRun?: (done: number, total: number) => void;
 }
 
 type Target = { name: string; assumed: boolean; get: (b: BudgetInput) => Quantity };
@@ -50,13 +52,20 @@ export function assumptionSensitivity(input: BudgetInput, options: SensitivityOp
   if (!(lo > 0) || !(hi > lo) || !Number.isFinite(hi)) throw new InputError('--range', `must be two scales 0 < low < high, e.g. 0.5,2; got ${lo},${hi}`);
   if (!input.requirements?.length) throw new InputError('requirements', 'sensitivity reports the change in each requirement\'s worst value; the budget has no requirements');
   const scales = [lo, Math.sqrt(lo * Math.sqrt(lo * hi)), Math.sqrt(lo * hi), Math.sqrt(hi * Math.sqrt(lo * hi)), hi].filter((s) => s !== 1);
+  const list = targets(input, options.rows ?? []);
+  const total = 1 + list.length * scales.length;
+  let done = 0;
+  const tick = () => options.onRun?.(++done, total);
   const base = worstValues(input);
+  tick();
   const entries: SensitivityEntry[] = [];
-  for (const target of targets(input, options.rows ?? [])) {
+  for (const target of list) {
     const byScale = scales.map((scale) => {
       const varied: BudgetInput = JSON.parse(JSON.stringify(input));
       target.get(varied).value *= scale;
-      return { scale, worst: worstValues(varied) };
+      const worst = worstValues(varied);
+      tick();
+      return { scale, worst };
     });
     input.requirements.forEach((r, i) => {
       const rows = byScale.map((s) => ({ scale: s.scale, worst: s.worst[i].worst }));

@@ -6,6 +6,7 @@
 import { InputError } from '../errors';
 import type { SensorInput, SourceInput } from '../inputs/budget-input';
 import { resolveBiasInstability } from '../sources/bias-instability';
+import { tuningModels } from './tuning-choices';
 
 /** What turning rows into the filter's rows did, for the model built from them. */
 export interface FilterRows {
@@ -67,13 +68,12 @@ function tunedRow(row: SourceInput, path: string, id: string, randomWalkStart: M
     ...(tuning.correlationTime && { correlationTime: tuning.correlationTime }),
   };
   if (tuning.model === undefined) return tuned;
-  if (row.kind === 'multipath') {
-    if (tuning.model !== 'folded' && tuning.model !== 'states') throw new InputError(`${path}.model`, `a multipath row's filter model is "folded" or "states", got "${tuning.model}"`);
-    return { ...tuned, multipathModel: tuning.model };
+  const choices = tuningModels(row.kind);
+  if (!choices.some((c) => c.value === tuning.model)) {
+    const allowed = choices.length ? `a ${row.kind} row takes ${choices.map((c) => `"${c.value}"`).join(' or ')}` : `a ${row.kind} row takes none`;
+    throw new InputError(`${path}.model`, `"${tuning.model}" does not apply: ${allowed} (random-walk or gauss-markov on bias instability, folded or states on multipath)`);
   }
-  if (row.kind !== 'bias-instability' || (tuning.model !== 'random-walk' && tuning.model !== 'gauss-markov')) {
-    throw new InputError(`${path}.model`, `"${tuning.model}" does not apply to a ${row.kind} row; use "random-walk" or "gauss-markov" on bias instability, "folded" or "states" on multipath`);
-  }
+  if (row.kind === 'multipath') return { ...tuned, multipathModel: tuning.model as 'folded' | 'states' };
   if (tuning.model === 'gauss-markov') return tuned;
   const gm = resolveBiasInstability(tuned, 'angular-rate', path.replace(/\.tuning$/, ''));
   randomWalkStart.set(id, gm.sigmaSI * gm.sigmaSI);

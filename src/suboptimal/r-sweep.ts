@@ -33,17 +33,21 @@ export interface RSweep {
 }
 
 /**
- * Sweeps `sensorId`'s filter R over `factors`.
+ * Sweeps `sensorId`'s filter R over `factors`; `onPoint` hears after each point.
  * @throws InputError naming the sensor when it has no R (not an aiding sensor, or no noise rows) or the budget has no requirements.
  */
-export function sweepFilterR(input: BudgetInput, base: BudgetResult, sensorId: string, factors: number[] = DEFAULT_R_SCALES): RSweep {
+export function sweepFilterR(
+  input: BudgetInput, base: BudgetResult, sensorId: string, factors: number[] = DEFAULT_R_SCALES,
+  onPoint?: (done: number, total: number) => void,
+): RSweep {
   if (!base.model.sources.some((s) => s.sensorId === sensorId && s.measurementNoise.length > 0)) {
     const aiding = [...new Set(base.model.sources.filter((s) => s.measurementNoise.length > 0).map((s) => s.sensorId))];
     throw new InputError('--sensor', `"${sensorId}" gives the filter no R to scale; aiding sensors with R here: ${aiding.join(', ') || 'none'}`);
   }
   if (!base.requirements.length) throw new InputError('requirements', 'the R sweep reports each requirement\'s worst value; the budget has no requirements');
-  const points = factors.map((factor) => {
+  const points = factors.map((factor, k) => {
     const d = computeFilterDesign(input, base, { contributions: false, rScale: { sensorId, factor } });
+    onPoint?.(k + 1, factors.length);
     return {
       factor,
       values: d.actual.requirements.map((r, i) => ({

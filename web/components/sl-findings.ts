@@ -16,12 +16,15 @@ import './sl-noise-ledger';
 import './sl-sizing-panel';
 import './sl-compare-panel';
 import './sl-monte-carlo-panel';
+import './sl-sensitivity-panel';
+import './sl-r-sweep-panel';
 import type { BudgetDocument } from '../../src/index';
 
 /** The findings' tabs, in order, with their labels. */
 export const FINDINGS_TABS = [
   ['time', 'Over time'], ['shares', 'Shares'], ['checkpoint', 'Checkpoint'], ['calibration', 'Calibration'], ['noise', 'R · Q · P0'], ['sizing', 'Sizing'],
   ['montecarlo', 'Monte Carlo'],
+  ['assumptions', 'Assumptions'], ['r-sweep', 'R sweep'],
 ] as const;
 
 /** Key of a findings tab. */
@@ -164,6 +167,10 @@ export class SlFindings extends LitElement {
           <h3>Candidates compared</h3><sl-compare-panel .document=${this.document}></sl-compare-panel>`;
       case 'montecarlo':
         return html`<sl-monte-carlo-panel .document=${this.document}></sl-monte-carlo-panel>`;
+      case 'assumptions':
+        return html`<sl-sensitivity-panel .document=${this.document}></sl-sensitivity-panel>`;
+      case 'r-sweep':
+        return html`<sl-r-sweep-panel .document=${this.document}></sl-r-sweep-panel>`;
     }
   }
 

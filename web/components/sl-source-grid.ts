@@ -15,6 +15,7 @@ import { sourceCell } from '../grid/source-cells';
 import { GridController } from '../grid/grid-controller';
 import { blockedWithin, errorsWithin, isOmitted } from '../grid/view-lookup';
 import './sl-paste-report';
+import './sl-tuning-line';
 
 const FIELD_LABEL: Record<string, string> = { value: 'Magnitude', correlationTime: 'Correlation time', rate: 'Rate override' };
 /** Columns on a row's first line; the rest (provenance, assumed) sit on its second. */
@@ -52,6 +53,8 @@ export class SlSourceGrid extends LitElement {
     td.na { background: repeating-linear-gradient(135deg, transparent 0 4px, var(--sl-paper) 4px 6px); }
     td.unit-hint { font: 12px var(--sl-mono); color: var(--sl-ink-soft); padding-top: 5px; }
     tr.messages td { padding: 2px 6px 5px; }
+    tr.tuning td { padding: 0 6px 5px; }
+    button[aria-pressed='true'] { background: var(--sl-accent-soft); }
     label.assumed { display: flex; align-items: center; gap: 3px; font-size: 11px; color: var(--sl-ink-soft); }
     .kinds { max-width: 150px; }
   `];
@@ -66,6 +69,8 @@ export class SlSourceGrid extends LitElement {
   @property({ type: Number }) sensorIndex = 0;
 
   @state() private addKind?: SourceKind;
+  /** Whether the "filter as tuned" line shows under each row; undefined: shown when the document has a filter design. */
+  @state() private tuningShown?: boolean;
   /** Keyboard, focus, clipboard and the edits behind them. */
   readonly grid = new GridController(this);
 
@@ -101,6 +106,8 @@ export class SlSourceGrid extends LitElement {
         <button ?disabled=${none || row === 0} title="Alt+Up" @click=${() => this.grid.moveRow(-1)}>Move up</button>
         <button ?disabled=${none || row >= s.sources.length - 1} title="Alt+Down" @click=${() => this.grid.moveRow(1)}>Move down</button>
         <button ?disabled=${none} @click=${() => this.grid.deleteRow()}>Delete row</button>
+        <button class="tuning-toggle" aria-pressed=${String(this.showsTuning())} title="The filter's design beside each row: the value it is tuned with, left out, inflation, state model"
+          @click=${() => (this.tuningShown = !this.showsTuning())}>Filter as tuned</button>
       </div>
       <div class="hint" id="paste-hint">Paste rows from a spreadsheet (Ctrl+V on the grid), tab-separated in this order: ${PASTE_COLUMNS.join(' · ')}. Ctrl+C copies the active rows the same way.</div>
       <table role="grid" aria-label=${`Error sources of ${s.id}`} aria-describedby="paste-hint" @keydown=${this.grid.keydown} @focusin=${this.grid.focusin}>
@@ -126,8 +133,16 @@ export class SlSourceGrid extends LitElement {
     return html`<tbody class=${cls}>
       <tr aria-selected=${this.grid.isSelected(r) ? 'true' : 'false'}>${SOURCE_COLUMNS.slice(0, FIRST_LINE).map((_, c) => td(c))}</tr>
       <tr class="second">${SECOND_LINE_HEADERS.map(([id, c, span]) => td(c, span, id))}</tr>
+      ${this.showsTuning() ? html`<tr class="tuning"><td colspan=${FIRST_LINE}><sl-tuning-line .store=${this.store} .sensor=${s} .sensorIndex=${this.sensorIndex}
+        .rowIndex=${r} .view=${this.view}></sl-tuning-line></td></tr>` : nothing}
       ${this.renderMessages(r)}
     </tbody>`;
+  }
+
+  /** True when the "filter as tuned" line shows: as the user toggled it, else when some row of the document carries a design. */
+  showsTuning(): boolean {
+    const doc = this.store?.document ?? this.doc;
+    return this.tuningShown ?? (doc?.sensors.some((s) => s.sources.some((row) => row.tuning !== undefined)) ?? false);
   }
 
   private renderMessages(r: number) {

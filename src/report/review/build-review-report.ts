@@ -1,6 +1,11 @@
 import type { BudgetDocument, SizingRunEntry } from '../../document/budget-document';
 import { evaluateBudgetDocument } from '../../sheet';
-import { computeBudget } from '../../pipeline';
+import { computeBudget, type BudgetResult } from '../../pipeline';
+import { computeFilterDesign } from '../../suboptimal/compute-filter-design';
+import { hasFilterDesign } from '../../suboptimal/filter-rows';
+import { sweepFilterR } from '../../suboptimal/r-sweep';
+import { assumptionSensitivity, type SensitivityOptions } from '../../sensitivity/assumption-sensitivity';
+import { buildFilterDesignJson } from '../filter-design-json';
 import type { BudgetInput } from '../../inputs/budget-input';
 import { sizeSource } from '../../budget/sizing';
 import { InputError, SigmaLedgerError } from '../../errors';
@@ -8,6 +13,14 @@ import { buildJsonResult } from '../json-result';
 import type { ReviewReport } from './review-report';
 import type { ReportProvenance, ReviewContext, SizingOutcome } from './review-context';
 import { REVIEW_SECTIONS } from './review-sections';
+
+/** Analyses the report adds when asked (the CLI's --sensitivity and --r-sweep; the document has no key for them yet). */
+export interface ReviewAnalyses {
+  /** Run the assumption sensitivity with these options (rows picked, range). */
+  sensitivity?: SensitivityOptions;
+  /** Sweep the filter's R of each of these aiding sensors from ×0.1 to ×10. */
+  rSweepSensors?: string[];
+}
 
 /** A sizing run to include: the row `vary` (`sensorId.rowId`) against requirement `requirement` (the document's `sizing[]`). */
 export type SizingRequest = Pick<SizingRunEntry, 'requirement' | 'vary'>;
@@ -22,7 +35,9 @@ export type SizingRequest = Pick<SizingRunEntry, 'requirement' | 'vary'>;
  * @throws InputError when nothing can be computed (a start-pose or step cell
  *   failed, or the engine refuses the input); the message names the field.
  */
-export function buildReviewReport(document: BudgetDocument, provenance: ReportProvenance, sizing: SizingRequest[] = document.sizing ?? []): ReviewReport {
+export function buildReviewReport(
+  document: BudgetDocument, provenance: ReportProvenance, sizing: SizingRequest[] = document.sizing ?? [], analyses: ReviewAnalyses = {},
+): ReviewReport {
   const sheet = evaluateBudgetDocument(document);
   if (!sheet.input) throw new InputError(provenance.fileName, sheet.blocked ?? 'nothing can be computed');
   const input = sheet.input;
@@ -33,12 +48,33 @@ export function buildReviewReport(document: BudgetDocument, provenance: ReportPr
     json: buildJsonResult(result, document.title),
     cellValues: sheet.cellValues,
     sizing: sizing.map((s) => runSizing(input, s)),
+    ...filterAnalyses(input, result, analyses),
   };
   return {
     title: document.title + (problems.length ? ' (PARTIAL)' : ''),
     subtitle: `${provenance.fileName} · SHA-256 ${provenance.documentSha256} · Sigma Ledger ${provenance.toolVersion}`,
     sections: REVIEW_SECTIONS.map((build) => build(ctx)).filter((s) => s !== undefined),
   };
+}
+
+/** The filter design (when rows are tuned), the sensitivity and the R sweeps asked for; a run that cannot be made keeps its message. */
+function filterAnalyses(input: BudgetInput, result: BudgetResult, analyses: ReviewAnalyses): Pick<ReviewContext, 'filterDesign' | 'sensitivity' | 'rSweeps'> {
+  const design = hasFilterDesign(input.sensors) ? computeFilterDesign(input, result) : undefined;
+  const range = analyses.sensitivity?.range ?? [0.5, 2];
+  return {
+    ...(design && { filterDesign: { result: design, json: buildFilterDesignJson(design, result.model, input) } }),
+    ...(analyses.sensitivity && { sensitivity: attempt(() => ({ range, entries: assumptionSensitivity(input, analyses.sensitivity) }), (problem) => ({ problem })) }),
+    rSweeps: (analyses.rSweepSensors ?? []).map((id) => attempt(() => sweepFilterR(input, result, id), (problem) => ({ sensorId: id, problem }))),
+  };
+}
+
+function attempt<T, F>(run: () => T, failed: (problem: string) => F): T | F {
+  try {
+    return run();
+  } catch (e) {
+    if (!(e instanceof SigmaLedgerError)) throw e;
+    return failed(e.message);
+  }
 }
 
 function runSizing(input: BudgetInput, s: SizingRequest): SizingOutcome {

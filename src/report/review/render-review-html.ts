@@ -3,6 +3,7 @@ import { escapeHtml } from './escape-html';
 import { cellText, type ReportBlock, type ReportCell, type ReportTable, type ReviewReport } from './review-report';
 import { REPORT_CSS } from './report-stylesheet';
 import { renderLineChartSvg } from './svg-line-chart';
+import { renderBarChartSvg } from './svg-bar-chart';
 
 /**
  * The report as one self-contained HTML file: inline stylesheet, inline SVG
@@ -41,6 +42,8 @@ function blockHtml(b: ReportBlock, id: string): string {
       return tableHtml(b);
     case 'chart':
       return `<figure>${renderLineChartSvg(b.chart, id)}<figcaption>${escapeHtml(b.caption)}</figcaption></figure>`;
+    case 'bars':
+      return `<figure>${renderBarChartSvg(b.chart)}<figcaption>${escapeHtml(b.caption)}</figcaption></figure>`;
   }
 }
 

@@ -32,6 +32,8 @@ function blockMarkdown(b: ReportBlock): string {
       return tableMarkdown(b);
     case 'chart':
       return `*Chart (in the HTML report): ${b.chart.title}: ${b.chart.series.map((s) => s.label).join(', ')}. ${b.caption}*`;
+    case 'bars':
+      return `*Bar chart (in the HTML report): ${b.chart.title}. ${b.caption}*`;
   }
 }
 

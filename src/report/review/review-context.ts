@@ -5,6 +5,10 @@ import type { SizingResult } from '../../budget/sizing';
 import type { JsonResult } from '../json-result';
 import { formatSignificant, withUnit } from '../../units';
 import type { SimulationJson } from '../../simulation/simulation-json';
+import type { FilterDesignResult } from '../../suboptimal/compute-filter-design';
+import type { FilterDesignJson } from '../filter-design-json';
+import type { SensitivityEntry } from '../../sensitivity/assumption-sensitivity';
+import type { RSweep } from '../../suboptimal/r-sweep';
 
 /** Who made the report and from which bytes, so a reviewer can rerun it. */
 export interface ReportProvenance {
@@ -31,6 +35,12 @@ export interface ReviewContext extends ReportProvenance {
   sizing: SizingOutcome[];
   /** Cells that failed and were left out (the report is then partial). */
   problems: string[];
+  /** The filter as tuned against the truth, when rows carry a `tuning` (its JSON as `run --json` prints it). */
+  filterDesign?: { result: FilterDesignResult; json: FilterDesignJson };
+  /** The assumption sensitivity, when asked for (or why it could not be run). */
+  sensitivity?: { range: [number, number]; entries: SensitivityEntry[] } | { problem: string };
+  /** The R sweeps asked for, in order. */
+  rSweeps: (RSweep | { sensorId: string; problem: string })[];
 }
 
 /** A sizing run's answer, or why it could not be run (an unknown row or requirement). */

@@ -5,6 +5,7 @@
  * in both formats without touching either renderer.
  */
 import type { LineChart } from './svg-line-chart';
+import type { BarChart } from './svg-bar-chart';
 
 /** A table cell: text, or a number shown as `text` whose full value is kept for checks. */
 export type ReportCell = string | { text: string; value: number };
@@ -28,7 +29,8 @@ export type ReportBlock =
   | { kind: 'list'; items: string[] }
   | { kind: 'definitions'; items: [term: string, text: string][] }
   | ReportTable
-  | { kind: 'chart'; chart: LineChart; caption: string };
+  | { kind: 'chart'; chart: LineChart; caption: string }
+  | { kind: 'bars'; chart: BarChart; caption: string };
 
 /** One section of the report; `id` is its anchor. */
 export interface ReportSection {

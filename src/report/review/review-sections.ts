@@ -19,6 +19,9 @@ import { assumedSection } from './sections/assumed-section';
 import { rerunSection } from './sections/rerun-section';
 import { candidatesSection } from './sections/candidates-section';
 import { monteCarloSection } from './sections/monte-carlo-section';
+import { filterDesignSection } from './sections/filter-design-section';
+import { sensitivitySection } from './sections/sensitivity-section';
+import { rSweepSection } from './sections/r-sweep-section';
 
 /** Builds one section from the context; undefined leaves it out. */
 export type SectionBuilder = (ctx: ReviewContext) => ReportSection | undefined;
@@ -32,6 +35,9 @@ export const REVIEW_SECTIONS: readonly SectionBuilder[] = [
   sizingSection,
   candidatesSection,
   monteCarloSection,
+  filterDesignSection,
+  sensitivitySection,
+  rSweepSection,
   modelSection,
   sensorRowsSection,
   noiseSection,

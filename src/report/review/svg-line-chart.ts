@@ -7,7 +7,8 @@
  * series-styles.ts), so the chart reads on a black-and-white print.
  * Plot-area margins are fixed, so charts of one report line up on x.
  */
-import { linearTicks } from '../tick-labels';
+import { linearTicks, type AxisTicks } from '../tick-labels';
+import { formatSignificant } from '../../units';
 import { escapeHtml } from './escape-html';
 import { markerSvg, seriesStyle } from './series-styles';
 import { decimateMinMax, valueAt } from './chart-points';
@@ -30,6 +31,8 @@ export interface LineChart {
   /** y range; default from 0 to the largest value or limit. */
   yMin?: number;
   yMax?: number;
+  /** A logarithmic x axis (every x, band end included, must be positive), ticked at 1, 2 and 5 per decade. */
+  xLog?: boolean;
 }
 
 /** Overall size and plot margins, px (viewBox units; the SVG scales to its container). */
@@ -46,7 +49,9 @@ const MARKERS_PER_SERIES = 6;
  * references). `idPrefix` keeps the ids of its hatch pattern and clip path
  * unique when several charts share one HTML page.
  */
-export function renderLineChartSvg(chart: LineChart, idPrefix = 'chart'): string {
+export function renderLineChartSvg(given: LineChart, idPrefix = 'chart'): string {
+  // A log axis is drawn as a linear one over log10 x, with ticks labelled in x.
+  const chart = given.xLog ? logX(given) : given;
   const xs = chart.series.flatMap((s) => [s.x[0], s.x[s.x.length - 1]]).filter(Number.isFinite);
   const xMin = Math.min(...xs, ...chart.bands.map((b) => b.from));
   const xMax = Math.max(...xs, ...chart.bands.map((b) => b.to));
@@ -95,7 +100,7 @@ interface Scales { xMin: number; xMax: number; yMin: number; yMax: number; sx: (
 function axesSvg(chart: LineChart, s: Scales): string {
   const bottom = s.top + PLOT_HEIGHT;
   const left = MARGIN.left, right = WIDTH - MARGIN.right;
-  const xt = linearTicks(s.xMin, s.xMax, 8);
+  const xt = chart.xLog ? logTicks(s.xMin, s.xMax) : linearTicks(s.xMin, s.xMax, 8);
   const yt = linearTicks(s.yMin, s.yMax, 5);
   const out = [`<rect x="${left}" y="${s.top}" width="${right - left}" height="${PLOT_HEIGHT}" fill="none" stroke="#000" stroke-width="0.8"/>`];
   yt.values.forEach((v, i) => {
@@ -111,6 +116,29 @@ function axesSvg(chart: LineChart, s: Scales): string {
   out.push(`<text x="${(left + right) / 2}" y="${bottom + 34}" text-anchor="middle" font-size="12">${escapeHtml(chart.xLabel)}</text>`);
   out.push(`<text transform="translate(14 ${s.top + PLOT_HEIGHT / 2}) rotate(-90)" text-anchor="middle" font-size="12">${escapeHtml(chart.yLabel)}</text>`);
   return out.join('\n');
+}
+
+/** The chart over log10 x (xLog kept, so the axis is ticked in decades). */
+function logX(chart: LineChart): LineChart {
+  return {
+    ...chart,
+    series: chart.series.map((s) => ({ ...s, x: s.x.map(Math.log10) })),
+    bands: chart.bands.map((b) => ({ ...b, from: Math.log10(b.from), to: Math.log10(b.to) })),
+  };
+}
+
+/** Ticks at 1, 2 and 5 times each power of ten within [lo, hi] (log10 units), labelled as the value x. */
+export function logTicks(lo: number, hi: number): AxisTicks {
+  const values: number[] = [], labels: string[] = [];
+  for (let e = Math.floor(lo); e <= Math.ceil(hi); e++) {
+    for (const m of [1, 2, 5]) {
+      const v = e + Math.log10(m);
+      if (v < lo - 1e-9 || v > hi + 1e-9) continue;
+      values.push(v);
+      labels.push(formatSignificant(m * 10 ** e, 1));
+    }
+  }
+  return { values, labels };
 }
 
 function bandSvg(b: LineChart['bands'][number], sx: (x: number) => number, top: number, row: number, idPrefix: string): string {
