@@ -83,6 +83,13 @@ const schema11 = {
       maxItems: 20,
       items: { $ref: '#/definitions/sizingRun' },
     },
+    candidates: {
+      description:
+        "Candidate rows per sensor (several gyros of different grades, two GNSS receivers): sigma-ledger compare runs each in place of its sensor's rows against the same mission and requirements, side by side, and names the cheapest that passes when prices are given.",
+      type: 'array',
+      maxItems: 10,
+      items: { $ref: '#/definitions/candidateSlot' },
+    },
   },
   definitions: {
     cell: {
@@ -574,6 +581,54 @@ const schema11 = {
           maxLength: 130,
         },
         note: { description: 'Free text: why this row is sized.', $ref: '#/definitions/note' },
+      },
+    },
+    candidateSlot: {
+      description:
+        "The candidates for one sensor: each replaces the sensor's rows (and, when it gives one, its rate) for one run.",
+      type: 'object',
+      additionalProperties: false,
+      required: ['sensor', 'options'],
+      properties: {
+        sensor: { description: 'Id of the sensor whose rows the candidates replace.', $ref: '#/definitions/id' },
+        currency: {
+          description: "Unit of the candidates' prices (free text, e.g. EUR).",
+          type: 'string',
+          maxLength: 20,
+        },
+        note: { description: 'Free text: what is being chosen and why.', $ref: '#/definitions/note' },
+        options: {
+          description: 'The candidates, in the order they are compared.',
+          type: 'array',
+          minItems: 1,
+          maxItems: 12,
+          items: { $ref: '#/definitions/candidate' },
+        },
+      },
+    },
+    candidate: {
+      description: "One candidate: a named set of rows for the slot's sensor, with an optional price.",
+      type: 'object',
+      additionalProperties: false,
+      required: ['id', 'sources'],
+      properties: {
+        id: { description: 'Candidate id, unique within its slot.', $ref: '#/definitions/id' },
+        price: {
+          description: "What one unit costs, in the slot's currency; leave out when unknown.",
+          type: 'number',
+          minimum: 0,
+        },
+        rate: {
+          description: "The candidate's output rate when it differs from the sensor's (a frequency).",
+          $ref: '#/definitions/quantity',
+        },
+        note: { description: 'Free text: the part, its datasheet, its grade.', $ref: '#/definitions/note' },
+        sources: {
+          description: "The candidate's rows, written as a sensor's rows.",
+          type: 'array',
+          maxItems: 64,
+          items: { $ref: '#/definitions/source' },
+        },
       },
     },
   },
@@ -5272,6 +5327,590 @@ function validate71(data, { instancePath = '', parentData, parentDataProperty, r
   validate71.errors = vErrors;
   return errors === 0;
 }
+const schema59 = {
+  description:
+    "The candidates for one sensor: each replaces the sensor's rows (and, when it gives one, its rate) for one run.",
+  type: 'object',
+  additionalProperties: false,
+  required: ['sensor', 'options'],
+  properties: {
+    sensor: { description: 'Id of the sensor whose rows the candidates replace.', $ref: '#/definitions/id' },
+    currency: { description: "Unit of the candidates' prices (free text, e.g. EUR).", type: 'string', maxLength: 20 },
+    note: { description: 'Free text: what is being chosen and why.', $ref: '#/definitions/note' },
+    options: {
+      description: 'The candidates, in the order they are compared.',
+      type: 'array',
+      minItems: 1,
+      maxItems: 12,
+      items: { $ref: '#/definitions/candidate' },
+    },
+  },
+};
+const schema62 = {
+  description: "One candidate: a named set of rows for the slot's sensor, with an optional price.",
+  type: 'object',
+  additionalProperties: false,
+  required: ['id', 'sources'],
+  properties: {
+    id: { description: 'Candidate id, unique within its slot.', $ref: '#/definitions/id' },
+    price: {
+      description: "What one unit costs, in the slot's currency; leave out when unknown.",
+      type: 'number',
+      minimum: 0,
+    },
+    rate: {
+      description: "The candidate's output rate when it differs from the sensor's (a frequency).",
+      $ref: '#/definitions/quantity',
+    },
+    note: { description: 'Free text: the part, its datasheet, its grade.', $ref: '#/definitions/note' },
+    sources: {
+      description: "The candidate's rows, written as a sensor's rows.",
+      type: 'array',
+      maxItems: 64,
+      items: { $ref: '#/definitions/source' },
+    },
+  },
+};
+function validate74(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
+  let vErrors = null;
+  let errors = 0;
+  if (errors === 0) {
+    if (data && typeof data == 'object' && !Array.isArray(data)) {
+      let missing0;
+      if ((data.id === undefined && (missing0 = 'id')) || (data.sources === undefined && (missing0 = 'sources'))) {
+        validate74.errors = [
+          {
+            instancePath,
+            schemaPath: '#/required',
+            keyword: 'required',
+            params: { missingProperty: missing0 },
+            message: "must have required property '" + missing0 + "'",
+            schema: schema62.required,
+            parentSchema: schema62,
+            data,
+          },
+        ];
+        return false;
+      } else {
+        const _errs1 = errors;
+        for (const key0 in data) {
+          if (!(key0 === 'id' || key0 === 'price' || key0 === 'rate' || key0 === 'note' || key0 === 'sources')) {
+            validate74.errors = [
+              {
+                instancePath,
+                schemaPath: '#/additionalProperties',
+                keyword: 'additionalProperties',
+                params: { additionalProperty: key0 },
+                message: 'must NOT have additional properties',
+                schema: false,
+                parentSchema: schema62,
+                data,
+              },
+            ];
+            return false;
+            break;
+          }
+        }
+        if (_errs1 === errors) {
+          if (data.id !== undefined) {
+            let data0 = data.id;
+            const _errs2 = errors;
+            const _errs3 = errors;
+            if (errors === _errs3) {
+              if (typeof data0 === 'string') {
+                if (!pattern4.test(data0)) {
+                  validate74.errors = [
+                    {
+                      instancePath: instancePath + '/id',
+                      schemaPath: '#/definitions/id/pattern',
+                      keyword: 'pattern',
+                      params: { pattern: '^[A-Za-z][A-Za-z0-9_]{0,63}$' },
+                      message: 'must match pattern "' + '^[A-Za-z][A-Za-z0-9_]{0,63}$' + '"',
+                      schema: '^[A-Za-z][A-Za-z0-9_]{0,63}$',
+                      parentSchema: schema30,
+                      data: data0,
+                    },
+                  ];
+                  return false;
+                }
+              } else {
+                validate74.errors = [
+                  {
+                    instancePath: instancePath + '/id',
+                    schemaPath: '#/definitions/id/type',
+                    keyword: 'type',
+                    params: { type: 'string' },
+                    message: 'must be string',
+                    schema: schema30.type,
+                    parentSchema: schema30,
+                    data: data0,
+                  },
+                ];
+                return false;
+              }
+            }
+            var valid0 = _errs2 === errors;
+          } else {
+            var valid0 = true;
+          }
+          if (valid0) {
+            if (data.price !== undefined) {
+              let data1 = data.price;
+              const _errs5 = errors;
+              if (errors === _errs5) {
+                if (typeof data1 == 'number' && isFinite(data1)) {
+                  if (data1 < 0 || isNaN(data1)) {
+                    validate74.errors = [
+                      {
+                        instancePath: instancePath + '/price',
+                        schemaPath: '#/properties/price/minimum',
+                        keyword: 'minimum',
+                        params: { comparison: '>=', limit: 0 },
+                        message: 'must be >= 0',
+                        schema: 0,
+                        parentSchema: schema62.properties.price,
+                        data: data1,
+                      },
+                    ];
+                    return false;
+                  }
+                } else {
+                  validate74.errors = [
+                    {
+                      instancePath: instancePath + '/price',
+                      schemaPath: '#/properties/price/type',
+                      keyword: 'type',
+                      params: { type: 'number' },
+                      message: 'must be number',
+                      schema: schema62.properties.price.type,
+                      parentSchema: schema62.properties.price,
+                      data: data1,
+                    },
+                  ];
+                  return false;
+                }
+              }
+              var valid0 = _errs5 === errors;
+            } else {
+              var valid0 = true;
+            }
+            if (valid0) {
+              if (data.rate !== undefined) {
+                const _errs7 = errors;
+                if (
+                  !validate12(data.rate, {
+                    instancePath: instancePath + '/rate',
+                    parentData: data,
+                    parentDataProperty: 'rate',
+                    rootData,
+                  })
+                ) {
+                  vErrors = vErrors === null ? validate12.errors : vErrors.concat(validate12.errors);
+                  errors = vErrors.length;
+                }
+                var valid0 = _errs7 === errors;
+              } else {
+                var valid0 = true;
+              }
+              if (valid0) {
+                if (data.note !== undefined) {
+                  let data3 = data.note;
+                  const _errs8 = errors;
+                  const _errs9 = errors;
+                  if (errors === _errs9) {
+                    if (typeof data3 === 'string') {
+                      if (func3(data3) > 2000) {
+                        validate74.errors = [
+                          {
+                            instancePath: instancePath + '/note',
+                            schemaPath: '#/definitions/note/maxLength',
+                            keyword: 'maxLength',
+                            params: { limit: 2000 },
+                            message: 'must NOT have more than 2000 characters',
+                            schema: 2000,
+                            parentSchema: schema20,
+                            data: data3,
+                          },
+                        ];
+                        return false;
+                      }
+                    } else {
+                      validate74.errors = [
+                        {
+                          instancePath: instancePath + '/note',
+                          schemaPath: '#/definitions/note/type',
+                          keyword: 'type',
+                          params: { type: 'string' },
+                          message: 'must be string',
+                          schema: schema20.type,
+                          parentSchema: schema20,
+                          data: data3,
+                        },
+                      ];
+                      return false;
+                    }
+                  }
+                  var valid0 = _errs8 === errors;
+                } else {
+                  var valid0 = true;
+                }
+                if (valid0) {
+                  if (data.sources !== undefined) {
+                    let data4 = data.sources;
+                    const _errs11 = errors;
+                    if (errors === _errs11) {
+                      if (Array.isArray(data4)) {
+                        if (data4.length > 64) {
+                          validate74.errors = [
+                            {
+                              instancePath: instancePath + '/sources',
+                              schemaPath: '#/properties/sources/maxItems',
+                              keyword: 'maxItems',
+                              params: { limit: 64 },
+                              message: 'must NOT have more than 64 items',
+                              schema: 64,
+                              parentSchema: schema62.properties.sources,
+                              data: data4,
+                            },
+                          ];
+                          return false;
+                        } else {
+                          var valid3 = true;
+                          const len0 = data4.length;
+                          for (let i0 = 0; i0 < len0; i0++) {
+                            const _errs13 = errors;
+                            if (
+                              !validate53(data4[i0], {
+                                instancePath: instancePath + '/sources/' + i0,
+                                parentData: data4,
+                                parentDataProperty: i0,
+                                rootData,
+                              })
+                            ) {
+                              vErrors = vErrors === null ? validate53.errors : vErrors.concat(validate53.errors);
+                              errors = vErrors.length;
+                            }
+                            var valid3 = _errs13 === errors;
+                            if (!valid3) {
+                              break;
+                            }
+                          }
+                        }
+                      } else {
+                        validate74.errors = [
+                          {
+                            instancePath: instancePath + '/sources',
+                            schemaPath: '#/properties/sources/type',
+                            keyword: 'type',
+                            params: { type: 'array' },
+                            message: 'must be array',
+                            schema: schema62.properties.sources.type,
+                            parentSchema: schema62.properties.sources,
+                            data: data4,
+                          },
+                        ];
+                        return false;
+                      }
+                    }
+                    var valid0 = _errs11 === errors;
+                  } else {
+                    var valid0 = true;
+                  }
+                }
+              }
+            }
+          }
+        }
+      }
+    } else {
+      validate74.errors = [
+        {
+          instancePath,
+          schemaPath: '#/type',
+          keyword: 'type',
+          params: { type: 'object' },
+          message: 'must be object',
+          schema: schema62.type,
+          parentSchema: schema62,
+          data,
+        },
+      ];
+      return false;
+    }
+  }
+  validate74.errors = vErrors;
+  return errors === 0;
+}
+function validate73(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
+  let vErrors = null;
+  let errors = 0;
+  if (errors === 0) {
+    if (data && typeof data == 'object' && !Array.isArray(data)) {
+      let missing0;
+      if (
+        (data.sensor === undefined && (missing0 = 'sensor')) ||
+        (data.options === undefined && (missing0 = 'options'))
+      ) {
+        validate73.errors = [
+          {
+            instancePath,
+            schemaPath: '#/required',
+            keyword: 'required',
+            params: { missingProperty: missing0 },
+            message: "must have required property '" + missing0 + "'",
+            schema: schema59.required,
+            parentSchema: schema59,
+            data,
+          },
+        ];
+        return false;
+      } else {
+        const _errs1 = errors;
+        for (const key0 in data) {
+          if (!(key0 === 'sensor' || key0 === 'currency' || key0 === 'note' || key0 === 'options')) {
+            validate73.errors = [
+              {
+                instancePath,
+                schemaPath: '#/additionalProperties',
+                keyword: 'additionalProperties',
+                params: { additionalProperty: key0 },
+                message: 'must NOT have additional properties',
+                schema: false,
+                parentSchema: schema59,
+                data,
+              },
+            ];
+            return false;
+            break;
+          }
+        }
+        if (_errs1 === errors) {
+          if (data.sensor !== undefined) {
+            let data0 = data.sensor;
+            const _errs2 = errors;
+            const _errs3 = errors;
+            if (errors === _errs3) {
+              if (typeof data0 === 'string') {
+                if (!pattern4.test(data0)) {
+                  validate73.errors = [
+                    {
+                      instancePath: instancePath + '/sensor',
+                      schemaPath: '#/definitions/id/pattern',
+                      keyword: 'pattern',
+                      params: { pattern: '^[A-Za-z][A-Za-z0-9_]{0,63}$' },
+                      message: 'must match pattern "' + '^[A-Za-z][A-Za-z0-9_]{0,63}$' + '"',
+                      schema: '^[A-Za-z][A-Za-z0-9_]{0,63}$',
+                      parentSchema: schema30,
+                      data: data0,
+                    },
+                  ];
+                  return false;
+                }
+              } else {
+                validate73.errors = [
+                  {
+                    instancePath: instancePath + '/sensor',
+                    schemaPath: '#/definitions/id/type',
+                    keyword: 'type',
+                    params: { type: 'string' },
+                    message: 'must be string',
+                    schema: schema30.type,
+                    parentSchema: schema30,
+                    data: data0,
+                  },
+                ];
+                return false;
+              }
+            }
+            var valid0 = _errs2 === errors;
+          } else {
+            var valid0 = true;
+          }
+          if (valid0) {
+            if (data.currency !== undefined) {
+              let data1 = data.currency;
+              const _errs5 = errors;
+              if (errors === _errs5) {
+                if (typeof data1 === 'string') {
+                  if (func3(data1) > 20) {
+                    validate73.errors = [
+                      {
+                        instancePath: instancePath + '/currency',
+                        schemaPath: '#/properties/currency/maxLength',
+                        keyword: 'maxLength',
+                        params: { limit: 20 },
+                        message: 'must NOT have more than 20 characters',
+                        schema: 20,
+                        parentSchema: schema59.properties.currency,
+                        data: data1,
+                      },
+                    ];
+                    return false;
+                  }
+                } else {
+                  validate73.errors = [
+                    {
+                      instancePath: instancePath + '/currency',
+                      schemaPath: '#/properties/currency/type',
+                      keyword: 'type',
+                      params: { type: 'string' },
+                      message: 'must be string',
+                      schema: schema59.properties.currency.type,
+                      parentSchema: schema59.properties.currency,
+                      data: data1,
+                    },
+                  ];
+                  return false;
+                }
+              }
+              var valid0 = _errs5 === errors;
+            } else {
+              var valid0 = true;
+            }
+            if (valid0) {
+              if (data.note !== undefined) {
+                let data2 = data.note;
+                const _errs7 = errors;
+                const _errs8 = errors;
+                if (errors === _errs8) {
+                  if (typeof data2 === 'string') {
+                    if (func3(data2) > 2000) {
+                      validate73.errors = [
+                        {
+                          instancePath: instancePath + '/note',
+                          schemaPath: '#/definitions/note/maxLength',
+                          keyword: 'maxLength',
+                          params: { limit: 2000 },
+                          message: 'must NOT have more than 2000 characters',
+                          schema: 2000,
+                          parentSchema: schema20,
+                          data: data2,
+                        },
+                      ];
+                      return false;
+                    }
+                  } else {
+                    validate73.errors = [
+                      {
+                        instancePath: instancePath + '/note',
+                        schemaPath: '#/definitions/note/type',
+                        keyword: 'type',
+                        params: { type: 'string' },
+                        message: 'must be string',
+                        schema: schema20.type,
+                        parentSchema: schema20,
+                        data: data2,
+                      },
+                    ];
+                    return false;
+                  }
+                }
+                var valid0 = _errs7 === errors;
+              } else {
+                var valid0 = true;
+              }
+              if (valid0) {
+                if (data.options !== undefined) {
+                  let data3 = data.options;
+                  const _errs10 = errors;
+                  if (errors === _errs10) {
+                    if (Array.isArray(data3)) {
+                      if (data3.length > 12) {
+                        validate73.errors = [
+                          {
+                            instancePath: instancePath + '/options',
+                            schemaPath: '#/properties/options/maxItems',
+                            keyword: 'maxItems',
+                            params: { limit: 12 },
+                            message: 'must NOT have more than 12 items',
+                            schema: 12,
+                            parentSchema: schema59.properties.options,
+                            data: data3,
+                          },
+                        ];
+                        return false;
+                      } else {
+                        if (data3.length < 1) {
+                          validate73.errors = [
+                            {
+                              instancePath: instancePath + '/options',
+                              schemaPath: '#/properties/options/minItems',
+                              keyword: 'minItems',
+                              params: { limit: 1 },
+                              message: 'must NOT have fewer than 1 items',
+                              schema: 1,
+                              parentSchema: schema59.properties.options,
+                              data: data3,
+                            },
+                          ];
+                          return false;
+                        } else {
+                          var valid3 = true;
+                          const len0 = data3.length;
+                          for (let i0 = 0; i0 < len0; i0++) {
+                            const _errs12 = errors;
+                            if (
+                              !validate74(data3[i0], {
+                                instancePath: instancePath + '/options/' + i0,
+                                parentData: data3,
+                                parentDataProperty: i0,
+                                rootData,
+                              })
+                            ) {
+                              vErrors = vErrors === null ? validate74.errors : vErrors.concat(validate74.errors);
+                              errors = vErrors.length;
+                            }
+                            var valid3 = _errs12 === errors;
+                            if (!valid3) {
+                              break;
+                            }
+                          }
+                        }
+                      }
+                    } else {
+                      validate73.errors = [
+                        {
+                          instancePath: instancePath + '/options',
+                          schemaPath: '#/properties/options/type',
+                          keyword: 'type',
+                          params: { type: 'array' },
+                          message: 'must be array',
+                          schema: schema59.properties.options.type,
+                          parentSchema: schema59.properties.options,
+                          data: data3,
+                        },
+                      ];
+                      return false;
+                    }
+                  }
+                  var valid0 = _errs10 === errors;
+                } else {
+                  var valid0 = true;
+                }
+              }
+            }
+          }
+        }
+      }
+    } else {
+      validate73.errors = [
+        {
+          instancePath,
+          schemaPath: '#/type',
+          keyword: 'type',
+          params: { type: 'object' },
+          message: 'must be object',
+          schema: schema59.type,
+          parentSchema: schema59,
+          data,
+        },
+      ];
+      return false;
+    }
+  }
+  validate73.errors = vErrors;
+  return errors === 0;
+}
 const pattern1 = new RegExp('^[A-Za-z_][A-Za-z0-9_]{0,63}$', 'u');
 function validate10(data, { instancePath = '', parentData, parentDataProperty, rootData = data } = {}) {
   /*# sourceURL="https://sigma-ledger.invalid/schemas/budget.schema.json" */ let vErrors = null;
@@ -5988,6 +6627,72 @@ function validate10(data, { instancePath = '', parentData, parentDataProperty, r
                                     var valid0 = _errs31 === errors;
                                   } else {
                                     var valid0 = true;
+                                  }
+                                  if (valid0) {
+                                    if (data.candidates !== undefined) {
+                                      let data18 = data.candidates;
+                                      const _errs34 = errors;
+                                      if (errors === _errs34) {
+                                        if (Array.isArray(data18)) {
+                                          if (data18.length > 10) {
+                                            validate10.errors = [
+                                              {
+                                                instancePath: instancePath + '/candidates',
+                                                schemaPath: '#/properties/candidates/maxItems',
+                                                keyword: 'maxItems',
+                                                params: { limit: 10 },
+                                                message: 'must NOT have more than 10 items',
+                                                schema: 10,
+                                                parentSchema: schema11.properties.candidates,
+                                                data: data18,
+                                              },
+                                            ];
+                                            return false;
+                                          } else {
+                                            var valid9 = true;
+                                            const len4 = data18.length;
+                                            for (let i4 = 0; i4 < len4; i4++) {
+                                              const _errs36 = errors;
+                                              if (
+                                                !validate73(data18[i4], {
+                                                  instancePath: instancePath + '/candidates/' + i4,
+                                                  parentData: data18,
+                                                  parentDataProperty: i4,
+                                                  rootData,
+                                                })
+                                              ) {
+                                                vErrors =
+                                                  vErrors === null
+                                                    ? validate73.errors
+                                                    : vErrors.concat(validate73.errors);
+                                                errors = vErrors.length;
+                                              }
+                                              var valid9 = _errs36 === errors;
+                                              if (!valid9) {
+                                                break;
+                                              }
+                                            }
+                                          }
+                                        } else {
+                                          validate10.errors = [
+                                            {
+                                              instancePath: instancePath + '/candidates',
+                                              schemaPath: '#/properties/candidates/type',
+                                              keyword: 'type',
+                                              params: { type: 'array' },
+                                              message: 'must be array',
+                                              schema: schema11.properties.candidates.type,
+                                              parentSchema: schema11.properties.candidates,
+                                              data: data18,
+                                            },
+                                          ];
+                                          return false;
+                                        }
+                                      }
+                                      var valid0 = _errs34 === errors;
+                                    } else {
+                                      var valid0 = true;
+                                    }
                                   }
                                 }
                               }

@@ -25,7 +25,7 @@ export function gradeCandidates(
 ): BudgetDocument {
   return {
     format: 'sigma-ledger-budget',
-    formatVersion: 1,
+    formatVersion: 2,
     title: 'Gyro grades standing still (invented test scenario)',
     settings: { step: q(0.1, 's') },
     mission: {
