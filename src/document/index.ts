@@ -16,9 +16,11 @@ export {
   type OutageEntry,
   type QuantityCell,
   type RequirementEntry,
+  type RowTuning,
   type SegmentEntry,
   type SensorEntry,
   type SourceRow,
+  type TuningModel,
 } from './budget-document';
 export { BudgetFileError } from './budget-file-error';
 export { BUDGET_SCHEMA, budgetValidator } from './budget-schema';

@@ -1,7 +1,7 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property, queryAll, state } from 'lit/decorators.js';
 import { SENSOR_KINDS, type BudgetDocument, type RSweep } from '../../src/index';
-import { formatSignificant } from '../../src/units';
+import { formatSignificant } from '../../src';
 import { ChartController } from '../charts/chart-controller';
 import { rSweepPlot } from '../charts/analysis-charts';
 import { AnalysisRunner } from '../compute/analysis-runner';

@@ -1,7 +1,7 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property, query, state } from 'lit/decorators.js';
 import type { BudgetDocument, SensitivityEntry } from '../../src/index';
-import { formatSignificant } from '../../src/units';
+import { formatSignificant } from '../../src';
 import { Chart } from '../charts/register-charts';
 import { sensitivityBars } from '../charts/analysis-charts';
 import { AnalysisRunner } from '../compute/analysis-runner';

@@ -1,7 +1,7 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
 import { tuningModels, type SensorEntry, type SourceRow, type ViewResult } from '../../src/index';
-import type { TuningModel } from '../../src/document/budget-document';
+import type { TuningModel } from '../../src';
 import type { DocumentStore } from '../state/document-store';
 import type { CellCommitDetail } from './sl-cell';
 import { cellErrorAt, cellValueAt } from '../grid/view-lookup';

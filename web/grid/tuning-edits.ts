@@ -4,7 +4,7 @@
  * left out, the variance inflation and the state model. A design that says
  * nothing any more is removed, so the row reads as "filter = truth".
  */
-import type { Cell, RowTuning, TuningModel } from '../../src/document/budget-document';
+import type { Cell, RowTuning, TuningModel } from '../../src';
 import type { DocumentStore } from '../state/document-store';
 
 /** One field of a row's filter design and its new content (undefined clears it). */
