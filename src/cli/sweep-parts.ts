@@ -45,6 +45,7 @@ export function writeSweepPart(path: string, part: SweepPart): void {
  * Reads a part written by {@link writeSweepPart} from its parsed JSON.
  * @throws InputError naming the file and the field.
  */
+// eslint-disable-next-line @typescript-eslint/no-explicit-any -- JSON of unknown shape: every field is checked here.
 export function sweepPartFromJson(path: string, raw: any): SweepPart {
   if (raw?.format !== SWEEP_PART_FORMAT || raw.formatVersion !== 1) throw new InputError(`${path}: format`, `is not "${SWEEP_PART_FORMAT}" version 1`);
   const text = (v: unknown, field: string) => {
@@ -59,6 +60,7 @@ export function sweepPartFromJson(path: string, raw: any): SweepPart {
   if (typeof r?.sourceId !== 'string' || typeof r.unit !== 'string' || !Array.isArray(r.requirements) || !Array.isArray(r.points)) {
     throw new InputError(`${path}: result`, 'must hold sourceId, unit, requirements and points');
   }
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- JSON of unknown shape: every field is checked here.
   r.points.forEach((p: any, i: number) => {
     const ok = typeof p?.value === 'number' && Array.isArray(p.worst) && Array.isArray(p.verdicts)
       && p.worst.length === r.requirements.length && p.verdicts.length === r.requirements.length;
@@ -77,6 +79,7 @@ export function sweepPartFromJson(path: string, raw: any): SweepPart {
 }
 
 /** Reads a part file's JSON and its `format` (to tell simulation parts from sweep parts). @throws InputError naming the file. */
+// eslint-disable-next-line @typescript-eslint/no-explicit-any -- JSON of unknown shape: every field is checked here.
 export function readPartJson(path: string): { format: unknown; raw: any } {
   try {
     const raw = JSON.parse(readFileSync(path, 'utf8'));

@@ -55,6 +55,7 @@ export interface SimulationJson {
  * @throws InputError naming the file and the field; a part file of a sharded study is told to merge first.
  */
 export function readSimulationJson(raw: unknown, source: string): SimulationJson {
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- JSON of unknown shape: every field is checked here.
   const r = raw as Record<string, any> | null;
   if (r?.format === 'sigma-ledger-simulation-part') {
     throw new InputError(source, 'is one part of a sharded study: combine the parts with "sigma-ledger merge PARTS... --json --output FILE" first');
@@ -74,15 +75,18 @@ export function readSimulationJson(raw: unknown, source: string): SimulationJson
   const steps = r.t_s.length;
   numbers(r.t_s, 't_s', steps);
   if (!Array.isArray(r.quantities)) fail('quantities', 'must be a list');
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- JSON of unknown shape: every field is checked here.
   r.quantities.forEach((q: any, i: number) => {
     if (typeof q?.id !== 'string' || typeof q.unit !== 'string') fail(`quantities[${i}]`, 'must have an id and a unit');
     for (const k of ['rms', 'mean', 'filterSigma', 'budgetSigma', 'bandLow', 'bandHigh']) numbers(q[k], `quantities[${i}].${k}`, steps);
   });
   if (!Array.isArray(r.nees)) fail('nees', 'must be a list');
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- JSON of unknown shape: every field is checked here.
   r.nees.forEach((g: any, i: number) => {
     if (typeof g?.id !== 'string') fail(`nees[${i}]`, 'must have an id');
     for (const k of ['dof', 'average', 'low', 'high']) numbers(g[k], `nees[${i}].${k}`, steps);
   });
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- JSON of unknown shape: every field is checked here.
   if (!Array.isArray(r.flags) || r.flags.some((f: any) => typeof f?.text !== 'string' || typeof f.subject !== 'string')) {
     fail('flags', 'must be a list of flags with subject and text');
   }

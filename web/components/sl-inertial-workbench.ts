@@ -15,7 +15,7 @@ import type { RequirementModel } from './sl-requirement-table';
 import type { DocumentStore } from '../state/document-store';
 import { editorStyles } from '../grid/editor-styles';
 import { editInertial, inertialDoc } from '../inertial/inertial-store';
-import { quantityField, tabBarStyles } from '../inertial/quantity-field';
+import { tabBarStyles } from '../inertial/quantity-field';
 import './sl-aiding-sensor';
 import './sl-imu-grid';
 import './sl-inertial-mission';

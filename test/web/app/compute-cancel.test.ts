@@ -11,8 +11,8 @@ import { freshApp, recomputed } from './helpers';
 describe('the page computation under hostile edits', () => {
   it('abandons a long computation when the document changes and shows the newest document', async () => {
     const app = await freshApp();
-    // The orchard rover at a 5 ms step: about 90 000 steps, seconds of work with contributions.
-    app.store.edit('fine step', (d) => (d.settings.step = { value: 0.005, unit: 's' }));
+    // The orchard rover at a 2 ms step: about 225 000 steps, seconds of work with contributions.
+    app.store.edit('fine step', (d) => (d.settings.step = { value: 0.002, unit: 's' }));
     await new Promise((r) => setTimeout(r, CANCEL_AFTER_MS + 300));
     expect(app.compute.status).to.equal('pending');
     app.store.edit('coarse step', (d) => (d.settings.step = { value: 0.1, unit: 's' }));

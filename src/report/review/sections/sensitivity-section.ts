@@ -1,5 +1,5 @@
 import type { ReportSection } from '../review-report';
-import { fmt, numCell, type ReviewContext } from '../review-context';
+import { fmt, type ReviewContext } from '../review-context';
 
 /** Bars shown in the ranking chart (the table lists every entry). */
 const CHART_BARS = 20;
