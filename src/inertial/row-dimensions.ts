@@ -6,6 +6,7 @@
  * Sensors; the engine's reading is imu-errors.ts and aiding/*.ts).
  */
 import type { DimensionName } from '../units';
+import { GYRO_ROW_DIMENSIONS } from '../units/gyro-row-dimensions';
 import type { AidingKind, ImuRowInput } from './inertial-input';
 
 /** IMU row kinds in the order the page offers them. */
@@ -23,14 +24,7 @@ export const IMU_ROW_DIMENSIONS: Record<
   ImuRowInput['instrument'],
   Record<(typeof IMU_ROW_KINDS)[number], DimensionName[]>
 > = {
-  gyro: {
-    'white-noise': ['angle-random-walk', 'angular-rate'],
-    'bias-instability': ['angular-rate'],
-    'rate-random-walk': ['rate-random-walk'],
-    'turn-on-bias': ['angular-rate'],
-    'scale-factor': ['ratio'],
-    quantisation: ['angular-rate', 'angle'],
-  },
+  gyro: GYRO_ROW_DIMENSIONS,
   accelerometer: {
     'white-noise': ['velocity-random-walk', 'acceleration'],
     'bias-instability': ['acceleration'],

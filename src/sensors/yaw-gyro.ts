@@ -6,6 +6,7 @@ import { resolveQuantisation } from '../sources/quantisation';
 import { resolveRateRandomWalk } from '../sources/rate-random-walk';
 import { resolveScaleFactor } from '../sources/scale-factor';
 import { pickDimension } from '../sources/source-kind';
+import { GYRO_ROW_DIMENSIONS } from '../units/gyro-row-dimensions';
 import { resolveRandomConstant } from '../sources/turn-on-bias';
 import { resolveWhiteNoise } from '../sources/white-noise';
 import { defineSensorKind, eachRow, refuseOutages, sensorRateHz, type Placement, type SensorContext, type SensorKindSpec } from './sensor-kind';
@@ -32,14 +33,7 @@ export const yawGyro: SensorKindSpec<'yaw-gyro'> = defineSensorKind({
   role: 'dead-reckoning',
   model: 'drives heading with the measured turn rate; its noise enters Q of the heading error, its biases and scale factor are states',
   defaults: { id: 'gyro', rateHz: 100 },
-  rows: {
-    'white-noise': ['angle-random-walk', 'angular-rate'],
-    'bias-instability': ['angular-rate'],
-    'rate-random-walk': ['rate-random-walk'],
-    'turn-on-bias': ['angular-rate'],
-    'scale-factor': ['ratio'],
-    quantisation: ['angular-rate', 'angle'],
-  },
+  rows: GYRO_ROW_DIMENSIONS,
   rowOptions: {
     quantisation: {
       field: 'quantum', label: 'quantum',
